@@ -1,0 +1,79 @@
+/**
+ * Drain time t(h) = ∫_h^{h0} A(η)/ΣQ(η) dη for a quasi-steady drain-down (dV/dt = −ΣQ, dV = A dh).
+ *
+ * Between outlet cutoffs the set of working outlets is fixed. In each such band the level is
+ * written h = c + u², c the band's lower cutoff, so dh = 2u du and the 1/√(h − c) singularity of
+ * an orifice or turbulent line (Q ∝ √(h − c)) becomes the smooth g(u) = 2u/ΣQ(c + u²). g is
+ * expensive (a line solve per value) and smooth, so it is interpolated once per band by
+ * piecewise Chebyshev series; A is cheap but may have kinks (cone knee, table rows), so the
+ * product A(c + u²)·g(u) is integrated by adaptive Gauss–Kronrod between the kinks.
+ */
+import { chebFit, piecewise } from './chebyshev';
+import type { OutletModel } from './drain-outlets';
+import { integrateRel } from './quadrature';
+import type { VesselGeometry } from './vessels';
+
+/** Relative tolerance of the flow interpolant and of each quadrature piece. */
+const REL_TOL = 1e-10;
+
+interface Band {
+  lo: number;
+  hi: number;
+  /** Lower cutoff the substitution is taken about, m. */
+  c: number;
+  /** Integrand in u: A(c + u²)·g(u). */
+  f: (u: number) => number;
+}
+
+function makeBand(geom: VesselGeometry, outlets: OutletModel[], lo: number, hi: number): Band {
+  let c = -Infinity;
+  const active: OutletModel[] = [];
+  for (const o of outlets) {
+    if (o.cutoff <= lo) {
+      active.push(o);
+      c = Math.max(c, o.cutoff);
+    }
+  }
+  const q = (h: number): number => {
+    let s = 0;
+    for (const o of active) s += o.flow(h);
+    return s;
+  };
+  const g = (u: number): number => (2 * u) / q(c + u * u);
+  const ghat = piecewise(chebFit(g, Math.sqrt(lo - c), Math.sqrt(hi - c), REL_TOL));
+  return { lo, hi, c, f: (u) => geom.area(c + u * u) * ghat(u) };
+}
+
+/** Descending, de-duplicated union of depth lists. */
+function breakpoints(lists: number[][]): number[] {
+  const all = lists.flat().sort((a, b) => b - a);
+  return all.filter((x, i) => i === 0 || x !== all[i - 1]);
+}
+
+/**
+ * Times, s, at which the level passes each depth of `rows` (descending from the initial depth
+ * rows[0] to the stop rows[rows.length − 1]). Every outlet with cutoff ≤ the stop depth must
+ * give flow > 0 above the stop.
+ */
+export function drainTimes(geom: VesselGeometry, outlets: OutletModel[], rows: number[]): number[] {
+  const h0 = rows[0];
+  const hs = rows[rows.length - 1];
+  const cuts = outlets.map((o) => o.cutoff).filter((c) => c > hs && c < h0);
+  const bounds = breakpoints([[h0, hs], cuts]);
+  const bands: Band[] = [];
+  for (let i = 0; i + 1 < bounds.length; i++)
+    bands.push(makeBand(geom, outlets, bounds[i + 1], bounds[i]));
+  const points = breakpoints([bounds, rows, geom.kinks(hs, h0)]);
+  const times = new Array<number>(rows.length).fill(0);
+  let t = 0;
+  let r = 1;
+  let b = 0;
+  for (let i = 0; i + 1 < points.length; i++) {
+    const lo = points[i + 1];
+    while (bands[b].lo > lo) b++;
+    const band = bands[b];
+    t += integrateRel(band.f, Math.sqrt(lo - band.c), Math.sqrt(points[i] - band.c), REL_TOL);
+    while (r < rows.length && rows[r] >= lo) times[r++] = t;
+  }
+  return times;
+}
