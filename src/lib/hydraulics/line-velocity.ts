@@ -106,12 +106,13 @@ function turbulent(line: ResolvedLine, g2h: number, nu: number, v4000: number, s
     x = colebrookX(re, rr, x);
     const f = 1 / (x * x);
     const p = (k + lam * f) * v * v - g2h;
+    if (p === 0) break;
     if (p > 0) hi = v;
     else lo = v;
     const dp = 2 * v * (k + lam * f) + lam * colebrookSlope(re, rr, x) * (d / nu) * v * v;
     let vn = v - p / dp;
-    if (!(vn > lo && vn < hi)) vn = 0.5 * (lo + hi);
-    const done = Math.abs(vn - v) <= REL_TOL * vn || p === 0;
+    if (!(vn >= lo && vn <= hi)) vn = 0.5 * (lo + hi);
+    const done = Math.abs(vn - v) <= REL_TOL * vn;
     v = vn;
     if (done) break;
   }
