@@ -37,8 +37,8 @@ export interface PipeSize {
 const IN = 0.0254;
 const MM = 0.001;
 
-/** Round to 0.01 mm so floating residue of OD − 2t does not show. */
-const tidy = (m: number): number => Math.round(m * 1e5) / 1e5;
+/** Round to 1 µm so floating residue of inch → metre and OD − 2t does not show. */
+const tidy = (m: number): number => Math.round(m * 1e6) / 1e6;
 
 /** [inch label, inch value, metric label in mm] */
 type HoseRow = [string, number, number];
@@ -100,6 +100,7 @@ function nps(family: SizeFamily, word: string, material: string, source: string)
 /** [OD mm, minimum wall mm, approximate inch size] — ISO 4427-2 PE100 SDR 11 */
 type PeRow = [number, number, string];
 
+// At 20 mm the standard's 2.0 mm minimum wall governs, so the ratio OD/e is 10 there, not 11.
 const PE_SDR11: PeRow[] = [
   [20, 2.0, '1/2'],
   [25, 2.3, '3/4'],
