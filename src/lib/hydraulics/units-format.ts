@@ -47,7 +47,7 @@ export function formatDuration(seconds: number): string {
 
 /**
  * An SI value as display text with its unit, e.g. formatQuantity('flow', 0.001, 'us') =
- * "15.9 US gal/min". Time is shown as h:mm ("1:02 h:min").
+ * "15.9 US gal/min", formatQuantity('temperature', 15, 'us') = "59.0 °F". Time is shown as h:mm ("1:02 h:min").
  */
 export function formatQuantity(
   kind: QuantityKind,
@@ -60,7 +60,7 @@ export function formatQuantity(
     const text = formatDuration(si);
     return text.endsWith(' s') || text === '—' ? text : `${text} h:min`;
   }
+  // A space before every unit symbol, °C and °F included (NIST SP 811 §7.2).
   const label = unitLabel(kind, system, unit);
-  const sep = label.startsWith('°') ? '' : ' ';
-  return `${formatNumber(toDisplay(kind, si, system, unit), digits)}${sep}${label}`;
+  return `${formatNumber(toDisplay(kind, si, system, unit), digits)} ${label}`;
 }

@@ -181,7 +181,8 @@ describe('formatQuantity', () => {
     expect(formatQuantity('flow', 1e-3, 'us')).toBe('15.9 US gal/min');
     expect(formatQuantity('flow', 1e-3, 'metric')).toBe('1.00 L/s');
     expect(formatQuantity('flow', 1e-3, 'metric', 3, 'm3/h')).toBe('3.60 m³/h');
-    expect(formatQuantity('temperature', 15, 'us')).toBe('59.0°F');
+    // NIST SP 811 §7.2: a space separates the number from °C / °F.
+    expect(formatQuantity('temperature', 15, 'us')).toBe('59.0 °F');
     expect(formatQuantity('diameter', 0.0254, 'us', 2)).toBe('1.0 in');
     expect(formatQuantity('time', 3725, 'metric')).toBe('1:02 h:min');
     expect(formatQuantity('time', 30, 'us')).toBe('30 s');
