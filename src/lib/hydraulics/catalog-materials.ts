@@ -27,7 +27,8 @@ export const materials: Material[] = [
     id: 'pvc',
     name: 'PVC pipe',
     roughness_m: 0.0015 * MM,
-    source: 'Drawn-tubing value (Moody 1944: 0.000005 ft ≈ 0.0015 mm), common practice for PVC',
+    source:
+      'Drawn-tubing value (Moody 1944: 0.000005 ft ≈ 0.0015 mm), common practice for PVC, from memory',
   },
   {
     id: 'hdpe',
@@ -39,7 +40,8 @@ export const materials: Material[] = [
     id: 'garden-hose',
     name: 'Garden hose (vinyl or rubber, smooth bore)',
     roughness_m: 0.01 * MM,
-    source: 'Common practice for smooth-bore hose; hose corrugation and kinks are not included',
+    source:
+      'Common practice estimate for smooth-bore hose, from memory; kinks and couplings not included',
   },
   {
     id: 'suction-hose-smooth',

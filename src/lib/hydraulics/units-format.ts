@@ -47,7 +47,8 @@ export function formatDuration(seconds: number): string {
 
 /**
  * An SI value as display text with its unit, e.g. formatQuantity('flow', 0.001, 'us') =
- * "15.9 US gal/min", formatQuantity('temperature', 15, 'us') = "59.0 °F". Time is shown as h:mm ("1:02 h:min").
+ * "15.9 US gal/min", formatQuantity('temperature', 15, 'us') = "59.0 °F".
+ * Time is shown as h:mm ("1:02 h:min"), or in seconds under a minute.
  */
 export function formatQuantity(
   kind: QuantityKind,
