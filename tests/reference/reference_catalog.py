@@ -1,7 +1,8 @@
 """Catalogue cross-checks from the tables and Crane-method functions shipped with fluids.
 
 Pipe dimensions: fluids.piping.nearest_pipe(NPS=..., schedule=...), which tabulates ASTM D1785
-(PVC Sch 40/80, schedules '40D1785', '80D1785') and ASME B36.10M (steel, schedule '40').
+(PVC Sch 40/80, schedules '40D1785', '80D1785'), ASME B36.10M (steel, schedule '40') and
+ASTM F2619 DR 11 IPS (polyethylene, 'DR11F2619IPS'; same OD and DR-11 minimum wall as D3035).
 Fittings: fluids.fittings Crane-method functions evaluated at 2 in Sch 40 (D = 52.50 mm).
 """
 
@@ -9,13 +10,16 @@ from fluids import fittings as F
 from fluids.piping import nearest_pipe
 
 NPS = [0.5, 0.75, 1, 1.25, 1.5, 2, 2.5, 3, 3.5, 4, 5, 6, 8]
-SCHEDULES = {'pvc-sch40': '40D1785', 'pvc-sch80': '80D1785', 'steel-sch40': '40'}
+SCHEDULES = {'pvc-sch40': '40D1785', 'pvc-sch80': '80D1785', 'steel-sch40': '40',
+             'hdpe-dr11-ips': 'DR11F2619IPS'}
 
 
 def sizes():
     rows = []
     for family, schedule in SCHEDULES.items():
         for nps in NPS:
+            if family == 'hdpe-dr11-ips' and nps == 3.5:
+                continue  # not a DR 11 IPS size
             _n, di, do, t = nearest_pipe(NPS=nps, schedule=schedule)
             rows.append({'family': family, 'nps': nps, 'schedule': schedule,
                          'inner_diameter_m': di, 'outer_diameter_m': do, 'wall_m': t})

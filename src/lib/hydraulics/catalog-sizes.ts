@@ -14,6 +14,7 @@ export type SizeFamily =
   | 'pvc-sch40'
   | 'pvc-sch80'
   | 'hdpe-sdr11'
+  | 'hdpe-dr11-ips'
   | 'steel-sch40';
 
 export interface PipeSize {
@@ -56,7 +57,7 @@ function hoses(family: SizeFamily, word: string, material: string, rows: HoseRow
   }));
 }
 
-/** [NPS label, id label, DN, OD in, Sch 40 wall in, Sch 80 wall in] — ASTM D1785 / ASME B36.10M */
+/** [NPS label, id label, DN, OD in, Sch 40 wall in, Sch 80 wall in]: ASTM D1785 / ASME B36.10M */
 type NpsRow = [string, string, number, number, number, number];
 
 // OD and minimum wall, inches, as tabulated in ASTM D1785 (PVC) and ASME B36.10M (steel, same
@@ -78,10 +79,25 @@ const NPS: NpsRow[] = [
   ['8', '8', 200, 8.625, 0.322, 0.5],
 ];
 
-function nps(family: SizeFamily, word: string, material: string, source: string): PipeSize[] {
-  const sch80 = family === 'pvc-sch80';
-  return NPS.map(([label, idLabel, dn, od, w40, w80]) => {
-    const wall = (sch80 ? w80 : w40) * IN;
+/** Wall thickness in inches for a row of the NPS table. */
+type WallRule = (row: NpsRow) => number;
+
+const sch40: WallRule = (r) => r[4];
+const sch80: WallRule = (r) => r[5];
+// ASTM D3035 DR 11: minimum wall = OD / 11, tabulated to 0.001 in; no 3 1/2 in size.
+const dr11: WallRule = (r) => Math.round((r[3] / 11) * 1000) / 1000;
+
+function nps(
+  family: SizeFamily,
+  word: string,
+  material: string,
+  source: string,
+  wallOf: WallRule,
+): PipeSize[] {
+  const rows = family === 'hdpe-dr11-ips' ? NPS.filter((r) => r[0] !== '3 1/2') : NPS;
+  return rows.map((row) => {
+    const [label, idLabel, dn, od] = row;
+    const wall = wallOf(row) * IN;
     return {
       id: `${family}-${idLabel}in`,
       family,
@@ -131,6 +147,10 @@ function peSdr11(): PipeSize[] {
   }));
 }
 
+const D1785 = 'ASTM D1785, from memory';
+const D3035 = 'ASTM D3035 DR 11, IPS OD − 2 × (OD/11) minimum wall, from memory';
+const B3610 = 'ASME B36.10M Sch 40: OD − 2 × nominal wall, from memory';
+
 export const sizes: PipeSize[] = [
   ...hoses('garden-hose', 'garden hose', 'garden-hose', [
     ['1/2', 0.5, 13],
@@ -153,15 +173,11 @@ export const sizes: PipeSize[] = [
     ['4', 4, 100],
     ['6', 6, 150],
   ]),
-  ...nps('pvc-sch40', 'PVC Sch 40', 'pvc', 'ASTM D1785 Sch 40: OD − 2 × minimum wall, from memory'),
-  ...nps('pvc-sch80', 'PVC Sch 80', 'pvc', 'ASTM D1785 Sch 80: OD − 2 × minimum wall, from memory'),
+  ...nps('pvc-sch40', 'PVC Sch 40', 'pvc', `${D1785} Sch 40: OD − 2 × minimum wall`, sch40),
+  ...nps('pvc-sch80', 'PVC Sch 80', 'pvc', `${D1785} Sch 80: OD − 2 × minimum wall`, sch80),
   ...peSdr11(),
-  ...nps(
-    'steel-sch40',
-    'steel Sch 40',
-    'steel-commercial',
-    'ASME B36.10M Sch 40: OD − 2 × nominal wall, from memory',
-  ),
+  ...nps('hdpe-dr11-ips', 'HDPE DR 11 (IPS)', 'hdpe', D3035, dr11),
+  ...nps('steel-sch40', 'steel Sch 40', 'steel-commercial', B3610, sch40),
 ];
 
 /** The size with this id, or undefined when the id is not in the catalogue. */
