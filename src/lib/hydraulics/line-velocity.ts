@@ -5,7 +5,7 @@
  * rises with Re, Colebrook falls no faster than Re^-0.25), so the root is unique and each regime
  * can be tried in turn. Allocation-free: it fills the state object it is given.
  */
-import type { LineState, ResolvedLine } from './line';
+import type { LineState, ResolvedLine } from './line-resolve';
 import { G } from './constants';
 import {
   colebrookSlope,
