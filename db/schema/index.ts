@@ -1,0 +1,3 @@
+export * from './users';
+export * from './organisations';
+export * from './jobs';

@@ -1,0 +1,62 @@
+import { relations } from 'drizzle-orm';
+import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { organisations } from './organisations';
+import { users } from './users';
+
+/** Job states, in the order a job usually moves through them. */
+export const JOB_STATUSES = ['scoping', 'quoted', 'on_site', 'wrapped_up'] as const;
+
+/** A piece of work for a client at a site; holds many calculations. */
+export const jobs = sqliteTable(
+  'jobs',
+  {
+    id: text('id').primaryKey(),
+    organisationId: text('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    title: text('title').notNull(),
+    client: text('client').notNull().default(''),
+    siteAddress: text('site_address').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    status: text('status', { enum: JOB_STATUSES }).notNull().default('scoping'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+    updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [index('jobs_org_idx').on(t.organisationId, t.updatedAt)],
+);
+
+/** A frozen calculation: the inputs, the engine's results and the engine version. */
+export const calculations = sqliteTable(
+  'calculations',
+  {
+    id: text('id').primaryKey(),
+    jobId: text('job_id')
+      .notNull()
+      .references(() => jobs.id, { onDelete: 'cascade' }),
+    organisationId: text('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    tool: text('tool', { enum: ['line', 'siphon', 'drain'] }).notNull(),
+    label: text('label').notNull().default(''),
+    inputs: text('inputs', { mode: 'json' }).notNull(),
+    results: text('results', { mode: 'json' }).notNull(),
+    unitSystem: text('unit_system', { enum: ['metric', 'us'] }).notNull(),
+    engineVersion: text('engine_version').notNull(),
+    /** The calculation this one revises, when saved as a new revision. */
+    revisionOf: text('revision_of'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [index('calculations_job_idx').on(t.jobId)],
+);
+
+export const jobsRelations = relations(jobs, ({ one, many }) => ({
+  organisation: one(organisations, { fields: [jobs.organisationId], references: [organisations.id] }),
+  calculations: many(calculations),
+}));
+
+export const calculationsRelations = relations(calculations, ({ one }) => ({
+  job: one(jobs, { fields: [calculations.jobId], references: [jobs.id] }),
+}));
