@@ -75,15 +75,28 @@ const R_IF97 = 461.526;
 export function densityIF97Region1(temperatureK: number, pressurePa: number): number {
   const pi = pressurePa / 16.53e6;
   const tau = 1386 / temperatureK;
-  const a = 7.1 - pi;
-  const b = tau - 1.222;
+  fillPowers(A_POW, 7.1 - pi, 0);
+  fillPowers(B_POW, tau - 1.222, B_OFFSET);
   let gp = 0;
   for (let i = 0; i < N1.length; i++) {
     const ii = I1[i];
     if (ii === 0) continue;
-    gp -= N1[i] * ii * a ** (ii - 1) * b ** J1[i];
+    gp -= N1[i] * ii * A_POW[ii - 1] * B_POW[J1[i] + B_OFFSET];
   }
   return 1 / ((R_IF97 * temperatureK * pi * gp) / pressurePa);
+}
+
+// Integer powers by repeated multiplication (much faster than Math.pow, error a few ulp).
+const A_POW = new Float64Array(32); // a^0 … a^31
+const B_OFFSET = 41;
+const B_POW = new Float64Array(B_OFFSET + 18); // b^-41 … b^17
+
+/** out[k] = x^(k − offset) for every slot of out. */
+function fillPowers(out: Float64Array, x: number, offset: number): void {
+  out[offset] = 1;
+  for (let k = offset + 1; k < out.length; k++) out[k] = out[k - 1] * x;
+  const inv = 1 / x;
+  for (let k = offset - 1; k >= 0; k--) out[k] = out[k + 1] * inv;
 }
 
 /**
@@ -95,6 +108,8 @@ export function waterDensity(temperatureC: number): number {
   return densityIF97Region1(temperatureC + KELVIN_OFFSET, P_SEA_LEVEL);
 }
 
+const X_POW = new Float64Array(6);
+const Y_POW = new Float64Array(7);
 const H0 = [1.67752, 2.20462, 0.6366564, -0.241605] as const;
 const HI = [0, 1, 2, 3, 0, 1, 2, 3, 5, 0, 1, 2, 3, 4, 0, 1, 0, 3, 4, 3, 5] as const;
 const HJ = [0, 0, 0, 0, 1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 3, 3, 4, 4, 5, 6, 6] as const;
@@ -119,10 +134,10 @@ export function viscosityIAPWS2008(temperatureK: number, densityKgM3: number): n
   const tr = temperatureK / 647.096;
   const dr = densityKgM3 / 322;
   const mu0 = (100 * Math.sqrt(tr)) / (H0[0] + H0[1] / tr + H0[2] / tr ** 2 + H0[3] / tr ** 3);
-  const x = 1 / tr - 1;
-  const y = dr - 1;
+  fillPowers(X_POW, 1 / tr - 1, 0);
+  fillPowers(Y_POW, dr - 1, 0);
   let s = 0;
-  for (let k = 0; k < HN.length; k++) s += HN[k] * x ** HI[k] * y ** HJ[k];
+  for (let k = 0; k < HN.length; k++) s += HN[k] * X_POW[HI[k]] * Y_POW[HJ[k]];
   return mu0 * Math.exp(dr * s) * 1e-6;
 }
 
