@@ -1,0 +1,39 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium } from 'playwright-core';
+import type { Browser, BrowserContext } from 'playwright-core';
+
+/** Debian's chromium, never a downloaded browser; flags keep it off this machine's closed network. */
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+/** A phone-sized context (360 × 740, touch) as a contractor on site would have. */
+export async function phoneContext(browser: Browser, baseURL: string): Promise<BrowserContext> {
+  return browser.newContext({
+    baseURL,
+    viewport: { width: 360, height: 740 },
+    deviceScaleFactor: 2,
+    isMobile: true,
+    hasTouch: true,
+    locale: 'en-GB',
+  });
+}
+
+/** A temp folder for downloads and screenshots. */
+export function tempDir(prefix = 'dw-browser-'): string {
+  return fs.mkdtempSync(path.join(os.tmpdir(), prefix));
+}
