@@ -53,20 +53,43 @@ function converged(c: Float64Array, relTol: number): boolean {
   return tail <= relTol * big;
 }
 
-/** Adaptive piecewise interpolant of f on [a, b], pieces in ascending order. */
+/** Most pieces one interpolant may use, so a rough function cannot make a request hang. */
+const MAX_PIECES = 256;
+
+/**
+ * Adaptive piecewise interpolant of f on [a, b], pieces in ascending order. Unconverged pieces
+ * are halved level by level; a piece narrower than `minWidth` (below the resolution at which f
+ * can be told apart from rounding) is accepted as it is, as are all once MAX_PIECES is reached.
+ */
 export function chebFit(
   f: (x: number) => number,
   a: number,
   b: number,
   relTol: number,
-  depth = 0,
+  minWidth = 0,
 ): ChebPiece[] {
-  const c = fit(f, a, b);
-  if (depth >= 30 || converged(c, relTol) || b - a <= 1e-12 * Math.max(1, Math.abs(b))) {
-    return [{ a, b, c }];
+  let pieces: { p: ChebPiece; done: boolean }[] = [{ p: { a, b, c: fit(f, a, b) }, done: false }];
+  for (let level = 0; level < 60; level++) {
+    const next: { p: ChebPiece; done: boolean }[] = [];
+    let split = false;
+    let count = pieces.length;
+    for (const item of pieces) {
+      const { p } = item;
+      const m = 0.5 * (p.a + p.b);
+      const stop = item.done || converged(p.c, relTol) || p.b - p.a <= minWidth || !(m > p.a && m < p.b);
+      if (stop || count >= MAX_PIECES) {
+        next.push({ p, done: true });
+        continue;
+      }
+      split = true;
+      count++;
+      next.push({ p: { a: p.a, b: m, c: fit(f, p.a, m) }, done: false });
+      next.push({ p: { a: m, b: p.b, c: fit(f, m, p.b) }, done: false });
+    }
+    pieces = next;
+    if (!split) break;
   }
-  const m = 0.5 * (a + b);
-  return [...chebFit(f, a, m, relTol, depth + 1), ...chebFit(f, m, b, relTol, depth + 1)];
+  return pieces.map((x) => x.p);
 }
 
 /** Evaluator over a list of pieces, caching the last piece (callers walk in order). */

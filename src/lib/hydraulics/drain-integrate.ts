@@ -10,7 +10,7 @@
  */
 import { chebFit, piecewise } from './chebyshev';
 import type { OutletModel } from './drain-outlets';
-import { integrateRel } from './quadrature';
+import { gk7, integrateRel } from './quadrature';
 import type { VesselGeometry } from './vessels';
 
 /** Relative tolerance of the flow interpolant and of each quadrature piece. */
@@ -40,14 +40,23 @@ function makeBand(geom: VesselGeometry, outlets: OutletModel[], lo: number, hi: 
     return s;
   };
   const g = (u: number): number => (2 * u) / q(c + u * u);
-  const ghat = piecewise(chebFit(g, Math.sqrt(lo - c), Math.sqrt(hi - c), REL_TOL));
+  // Below this width in u, h = c + u² no longer resolves the level in double precision.
+  const minWidth = 1e-7 * Math.sqrt(Math.max(1, Math.abs(c) + Math.abs(hi)));
+  const ghat = piecewise(chebFit(g, Math.sqrt(lo - c), Math.sqrt(hi - c), REL_TOL, minWidth));
   return { lo, hi, c, f: (u) => geom.area(c + u * u) * ghat(u) };
 }
 
 /** Descending, de-duplicated union of depth lists. */
 function breakpoints(lists: number[][]): number[] {
-  const all = lists.flat().sort((a, b) => b - a);
-  return all.filter((x, i) => i === 0 || x !== all[i - 1]);
+  let n = 0;
+  for (const l of lists) n += l.length;
+  const all = new Float64Array(n);
+  let k = 0;
+  for (const l of lists) for (let i = 0; i < l.length; i++) all[k++] = l[i];
+  all.sort();
+  const out: number[] = [];
+  for (let i = n - 1; i >= 0; i--) if (i === n - 1 || all[i] !== all[i + 1]) out.push(all[i]);
+  return out;
 }
 
 /**
@@ -72,7 +81,14 @@ export function drainTimes(geom: VesselGeometry, outlets: OutletModel[], rows: n
     const lo = points[i + 1];
     while (bands[b].lo > lo) b++;
     const band = bands[b];
-    t += integrateRel(band.f, Math.sqrt(lo - band.c), Math.sqrt(points[i] - band.c), REL_TOL);
+    t += integrateRel(
+      band.f,
+      Math.sqrt(lo - band.c),
+      Math.sqrt(points[i] - band.c),
+      REL_TOL,
+      0,
+      gk7,
+    );
     while (r < rows.length && rows[r] >= lo) times[r++] = t;
   }
   return times;

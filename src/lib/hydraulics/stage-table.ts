@@ -27,20 +27,26 @@ function validateStagePoints(points: StagePoint[]): void {
   if (!Array.isArray(points) || points.length < 2 || points.length > 1000) {
     throw new EngineInputError('vessel.points', 'a depth–area table needs 2 to 1000 rows');
   }
-  points.forEach((p, i) => {
-    const path = `vessel.points.${i}`;
-    if (!Number.isFinite(p.depth_m))
-      throw new EngineInputError(`${path}.depth_m`, 'must be a number');
-    if (!(Number.isFinite(p.area_m2) && p.area_m2 > 0)) {
-      throw new EngineInputError(`${path}.area_m2`, 'area must be greater than 0');
-    }
-    if (i === 0 && p.depth_m !== 0) {
-      throw new EngineInputError(`${path}.depth_m`, 'the first row must be at depth 0');
-    }
-    if (i > 0 && !(p.depth_m > points[i - 1].depth_m)) {
-      throw new EngineInputError(`${path}.depth_m`, 'depths must increase strictly row by row');
-    }
-  });
+  for (let i = 0; i < points.length; i++) {
+    const p = points[i];
+    const problem = rowProblem(p, i === 0 ? undefined : points[i - 1]);
+    if (problem) throw new EngineInputError(`vessel.points.${i}.${problem[0]}`, problem[1]);
+  }
+}
+
+/** What is wrong with one row, as [field, message], or null (no strings built for good rows). */
+function rowProblem(p: StagePoint, prev: StagePoint | undefined): [string, string] | null {
+  if (!p || typeof p.depth_m !== 'number' || !Number.isFinite(p.depth_m)) {
+    return ['depth_m', 'must be a number'];
+  }
+  if (!(typeof p.area_m2 === 'number' && Number.isFinite(p.area_m2) && p.area_m2 > 0)) {
+    return ['area_m2', 'area must be greater than 0'];
+  }
+  if (!prev && p.depth_m !== 0) return ['depth_m', 'the first row must be at depth 0'];
+  if (prev && !(p.depth_m > prev.depth_m)) {
+    return ['depth_m', 'depths must increase strictly row by row'];
+  }
+  return null;
 }
 
 /**
@@ -54,8 +60,12 @@ function validateStagePoints(points: StagePoint[]): void {
 export function stageTable(points: StagePoint[]): StageTable {
   validateStagePoints(points);
   const n = points.length;
-  const depths = Float64Array.from(points, (p) => p.depth_m);
-  const areas = Float64Array.from(points, (p) => p.area_m2);
+  const depths = new Float64Array(n);
+  const areas = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    depths[j] = points[j].depth_m;
+    areas[j] = points[j].area_m2;
+  }
   const slopes = new Float64Array(n - 1);
   const volumes = new Float64Array(n);
   for (let j = 0; j < n - 1; j++) {
