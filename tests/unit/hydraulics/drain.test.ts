@@ -93,6 +93,28 @@ describe('solveDrain against closed forms', () => {
     expect(rel(r.time_s, t)).toBeLessThan(CLOSED_TOL);
   });
 
+  test('empties a box through a zero-length line like an orifice of Cd = 1/√(1 + K_e)', () => {
+    // No friction when L = 0: H = (1 + K_e)·V²/(2g), so Q = a·√(2gh/(1 + K_e)) and Torricelli
+    // gives t = A_tank·√(1 + K_e)/a·√(2h₀/g).
+    const line = {
+      inner_diameter_m: 0.03,
+      length_m: 0,
+      roughness_m: 0,
+      entrance_k: 0.8,
+      parallel_lines: 2,
+    };
+    const r = solveDrain({
+      vessel: { shape: 'box', length_m: 1, width_m: 1.2, depth_m: 1 },
+      initial_depth_m: 0.9,
+      outlet: { type: 'line', line, outlet_elevation_m: 0 },
+    });
+    const a = 2 * Math.PI * 0.03 ** 2 * 0.25;
+    expect(r.stop_reason).toBe('final_depth');
+    expect(rel(r.time_s, ((1.2 * Math.sqrt(1.8)) / a) * Math.sqrt((2 * 0.9) / G))).toBeLessThan(
+      CLOSED_TOL,
+    );
+  });
+
   test('stops where the surface reaches an orifice above the bottom (intake_uncovered)', () => {
     const r = solveDrain({
       vessel: { shape: 'box', length_m: 1, width_m: 1, depth_m: 1 },
