@@ -1,6 +1,6 @@
 import { count } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
-import { jobs, memberships, organisations, users } from '../../db/schema';
+import { calculations, jobs, memberships, organisations, users } from '../../db/schema';
 import { seedDemo } from '../../db/seed';
 import { openDatabase } from '../../src/lib/db/client';
 import { runMigrations } from '../../src/lib/db/migrate';
@@ -15,7 +15,7 @@ function schemaDump(db: ReturnType<typeof freshDb>['db']): string {
 }
 
 function counts(db: ReturnType<typeof freshDb>['db']): number[] {
-  return [users, organisations, memberships, jobs].map((t) => db.select({ n: count() }).from(t).all()[0].n);
+  return [users, organisations, memberships, jobs, calculations].map((t) => db.select({ n: count() }).from(t).all()[0].n);
 }
 
 describe('migrations', () => {
@@ -54,6 +54,10 @@ describe('demo seed', () => {
     expect(nOrgs).toBe(2);
     expect(nMemberships).toBe(4);
     expect(nJobs).toBeGreaterThanOrEqual(3);
+    const calcs = db.select().from(calculations).all();
+    expect(calcs.map((c) => c.tool).sort()).toEqual(['drain', 'line', 'siphon']);
+    // The seed stores what the engine answered, so a saved demo job opens with real results.
+    expect(calcs.every((c) => typeof (c.results as { status?: string }).status === 'string')).toBe(true);
     const staff = db.select().from(users).all().filter((u) => u.staffRole === 'support');
     expect(staff).toHaveLength(1);
   });
