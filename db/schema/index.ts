@@ -1,3 +1,4 @@
 export * from './users';
 export * from './organisations';
 export * from './jobs';
+export * from './flags';
