@@ -1,15 +1,21 @@
 import { defineMiddleware } from 'astro:middleware';
 import { randomUUID } from 'node:crypto';
+import { guard } from './lib/auth/guard';
 
 /**
  * Runs once per request. Tags each request with an id (echoed as X-Request-Id so a user's report
- * can be matched to the logs). Prerendered pages are built once and skip all of this.
+ * can be matched to the logs), then enforces the route table (src/lib/auth/routes.ts): who is
+ * asking is looked up only where the table needs it. Prerendered pages are built once and skip
+ * all of this.
  */
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
   const given = context.request.headers.get('x-request-id');
   context.locals.requestId = given && /^[\w-]{1,64}$/.test(given) ? given : randomUUID();
-  const response = await next();
+  context.locals.user = null;
+  context.locals.organisation = null;
+  context.locals.role = null;
+  const response = guard(context) ?? (await next());
   response.headers.set('X-Request-Id', context.locals.requestId);
   return response;
 });
