@@ -2,3 +2,4 @@ export * from './users';
 export * from './organisations';
 export * from './jobs';
 export * from './flags';
+export * from './brands';

@@ -52,11 +52,36 @@ export const calculations = sqliteTable(
   (t) => [index('calculations_job_idx').on(t.jobId)],
 );
 
+/** A read-only link to a job's report: the token is only in the link, we keep its SHA-256. */
+export const reportShares = sqliteTable(
+  'report_shares',
+  {
+    id: text('id').primaryKey(),
+    tokenHash: text('token_hash').notNull().unique(),
+    jobId: text('job_id')
+      .notNull()
+      .references(() => jobs.id, { onDelete: 'cascade' }),
+    organisationId: text('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+    expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+    revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('report_shares_job_idx').on(t.jobId)],
+);
+
 export const jobsRelations = relations(jobs, ({ one, many }) => ({
   organisation: one(organisations, { fields: [jobs.organisationId], references: [organisations.id] }),
   calculations: many(calculations),
+  reportShares: many(reportShares),
 }));
 
 export const calculationsRelations = relations(calculations, ({ one }) => ({
   job: one(jobs, { fields: [calculations.jobId], references: [jobs.id] }),
+}));
+
+export const reportSharesRelations = relations(reportShares, ({ one }) => ({
+  job: one(jobs, { fields: [reportShares.jobId], references: [jobs.id] }),
 }));
