@@ -1,0 +1,99 @@
+import { useMemo } from 'react';
+import type { ReactElement } from 'react';
+import type { QuickMode, QuickState } from '../lib/calculators/quick-check';
+import { QUICK_DEFAULTS } from '../lib/calculators/quick-check';
+import type { QuickAnswer } from '../lib/calculators/quick-result';
+import { quickAnswer } from '../lib/calculators/quick-result';
+import type { UnitSystem } from '../lib/hydraulics/units';
+import { formatQuantity } from '../lib/hydraulics/units';
+import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
+import CautionNotes from './CautionNotes';
+import ChoiceButtons from './ChoiceButtons';
+import FigureList from './FigureList';
+import QuickInputs from './QuickInputs';
+import ShareLink from './ShareLink';
+import UnitToggle from './UnitToggle';
+import VerdictBanner from './VerdictBanner';
+import WarningList from './WarningList';
+
+const MODES = [
+  { value: 'siphon', label: 'Siphon' },
+  { value: 'line', label: 'Gravity line' },
+  { value: 'tank', label: 'Empty a tank' },
+];
+
+const FULL_TOOL: Record<QuickMode, { href: string; label: string }> = {
+  siphon: { href: '/siphon', label: 'Open the full siphon tool' },
+  line: { href: '/gravity-line', label: 'Open the full gravity-line tool' },
+  tank: { href: '/drain', label: 'Open the full drain-down tool' },
+};
+
+function Limits({ a, system }: { a: QuickAnswer; system: UnitSystem }): ReactElement | null {
+  const items: string[] = [];
+  if (a.biggest)
+    items.push(
+      `Biggest loss: ${a.biggest.name.toLowerCase()}, ${Math.round(a.biggest.share * 100)} % of the head (${formatQuantity('length', a.biggest.head_m, system)}).`,
+    );
+  if (a.crestMarginM !== undefined)
+    items.push(
+      a.crestMarginM >= 0
+        ? `Crest margin: the crest could rise ${formatQuantity('length', a.crestMarginM, system)} more before the working limit.`
+        : `Crest margin: the crest is ${formatQuantity('length', -a.crestMarginM, system)} past the working limit — lower it by that much.`,
+    );
+  if (items.length === 0) return null;
+  return (
+    <section aria-label="What limits it" className="rounded-lg border border-rule bg-white p-3">
+      <h3 className="font-extrabold">What limits it</h3>
+      <ul className="mt-1 list-disc space-y-1 pl-5" data-testid="limits">
+        {items.map((t) => (
+          <li key={t}>{t}</li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+/** The quick check: pick a set-up, type a few numbers, read the verdict and the cautions. */
+export default function QuickCheck(): ReactElement {
+  const system = useUnitSystem();
+  const { state, update, query } = useCalcState<QuickState>(QUICK_DEFAULTS);
+  const answer = useMemo(() => quickAnswer(state), [state]);
+  return (
+    <div className="space-y-5">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <ChoiceButtons
+          legend="What are you setting up?"
+          name="mode"
+          value={state.mode}
+          choices={MODES}
+          onChange={(v) => update({ mode: v as QuickMode })}
+        />
+        <UnitToggle />
+      </div>
+      <QuickInputs s={state} update={update} system={system} />
+      <div className="grid gap-4 md:grid-cols-[3fr_2fr]" aria-live="polite">
+        {'error' in answer ? (
+          <p role="alert" className="rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-4 font-semibold">
+            {answer.error}
+          </p>
+        ) : (
+          <>
+            <section aria-label="Result" className="min-w-0 space-y-3">
+              <VerdictBanner verdict={answer.verdict} />
+              <FigureList figures={answer.figures} system={system} />
+              <Limits a={answer} system={system} />
+              <WarningList warnings={answer.warnings} />
+            </section>
+            <CautionNotes ids={answer.cautions} />
+          </>
+        )}
+      </div>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <a href={`${FULL_TOOL[state.mode].href}`} className="flex min-h-11 items-center font-semibold text-teal-deep underline">
+          {FULL_TOOL[state.mode].label}
+        </a>
+        <ShareLink query={query} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,55 @@
+/**
+ * Calculator state for an island: starts at the defaults (so the server's HTML and the first
+ * client render agree), then takes the inputs from the page's query string, and keeps the query
+ * string up to date so the address bar is always a link to the result on screen.
+ */
+import { useStore } from '@nanostores/react';
+import { useCallback, useEffect, useState } from 'react';
+import type { UnitSystem } from '../hydraulics/units';
+import type { ShareRow, ShareState } from '../share-url';
+import { decodeShare, encodeShare } from '../share-url';
+import { $unitSystem } from './unit-system';
+
+/** True after the first client render. */
+export function useHydrated(): boolean {
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
+  return ready;
+}
+
+/** The crew's unit system; metric until hydrated, so server and client markup match. */
+export function useUnitSystem(): UnitSystem {
+  const stored = useStore($unitSystem);
+  return useHydrated() ? stored : 'metric';
+}
+
+export interface CalcState<T extends ShareState> {
+  state: T;
+  /** Change some inputs. */
+  update: (patch: Partial<T>) => void;
+  /** Query string of the current inputs (no leading '?'). */
+  query: string;
+}
+
+export function useCalcState<T extends ShareState>(
+  defaults: T,
+  rowTemplates: Record<string, ShareRow> = {},
+): CalcState<T> {
+  const [state, setState] = useState<T>(defaults);
+  const [loaded, setLoaded] = useState(false);
+  useEffect(() => {
+    setState(decodeShare(window.location.search, defaults, rowTemplates));
+    setLoaded(true);
+    // defaults are module constants; read the URL once
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+  const rowKeys = Object.fromEntries(Object.entries(rowTemplates).map(([k, t]) => [k, Object.keys(t)]));
+  const query = encodeShare(state, defaults, rowKeys);
+  useEffect(() => {
+    if (!loaded) return;
+    const url = `${window.location.pathname}${query ? `?${query}` : ''}${window.location.hash}`;
+    window.history.replaceState(window.history.state, '', url);
+  }, [query, loaded]);
+  const update = useCallback((patch: Partial<T>) => setState((s) => ({ ...s, ...patch })), []);
+  return { state, update, query };
+}
