@@ -46,6 +46,8 @@ export const calculations = sqliteTable(
     engineVersion: text('engine_version').notNull(),
     /** The calculation this one revises, when saved as a new revision. */
     revisionOf: text('revision_of'),
+    /** Path and query that reopen these inputs in their calculator (its share URL), if known. */
+    openPath: text('open_path'),
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
   },
