@@ -25,13 +25,19 @@ interface Band {
   f: (u: number) => number;
 }
 
-function makeBand(geom: VesselGeometry, outlets: OutletModel[], lo: number, hi: number): Band {
+function makeBand(
+  geom: VesselGeometry,
+  outlets: OutletModel[],
+  lo: number,
+  hi: number,
+  eps: number,
+): Band {
   let c = -Infinity;
   const active: OutletModel[] = [];
   for (const o of outlets) {
-    if (o.cutoff <= lo) {
+    if (o.cutoff <= lo + eps) {
       active.push(o);
-      c = Math.max(c, o.cutoff);
+      c = Math.min(lo, Math.max(c, o.cutoff));
     }
   }
   const q = (h: number): number => {
@@ -39,7 +45,10 @@ function makeBand(geom: VesselGeometry, outlets: OutletModel[], lo: number, hi: 
     for (const o of active) s += o.flow(h);
     return s;
   };
-  const g = (u: number): number => (2 * u) / q(c + u * u);
+  const g = (u: number): number => {
+    const flow = q(c + u * u);
+    return flow > 0 ? (2 * u) / flow : 0; // 0 only where u² underflows against c
+  };
   // Below this width in u, h = c + u² no longer resolves the level in double precision.
   const minWidth = 1e-7 * Math.sqrt(Math.max(1, Math.abs(c) + Math.abs(hi)));
   const ghat = piecewise(chebFit(g, Math.sqrt(lo - c), Math.sqrt(hi - c), REL_TOL, minWidth));
@@ -67,11 +76,13 @@ function breakpoints(lists: number[][]): number[] {
 export function drainTimes(geom: VesselGeometry, outlets: OutletModel[], rows: number[]): number[] {
   const h0 = rows[0];
   const hs = rows[rows.length - 1];
-  const cuts = outlets.map((o) => o.cutoff).filter((c) => c > hs && c < h0);
+  // Cutoffs closer than this to an end make no band of their own (a sliver of no volume).
+  const eps = 1e-12 * Math.max(1, Math.abs(h0));
+  const cuts = outlets.map((o) => o.cutoff).filter((c) => c > hs + eps && c < h0 - eps);
   const bounds = breakpoints([[h0, hs], cuts]);
   const bands: Band[] = [];
   for (let i = 0; i + 1 < bounds.length; i++)
-    bands.push(makeBand(geom, outlets, bounds[i + 1], bounds[i]));
+    bands.push(makeBand(geom, outlets, bounds[i + 1], bounds[i], eps));
   const points = breakpoints([bounds, rows, geom.kinks(hs, h0)]);
   const times = new Array<number>(rows.length).fill(0);
   let t = 0;

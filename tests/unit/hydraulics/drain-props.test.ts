@@ -31,12 +31,10 @@ const vessel: fc.Arbitrary<VesselInput> = fc.oneof(
     side_slope_h_per_v: len(0, 4),
     depth_m: len(0.5, 3),
   }),
-  fc
-    .array(len(0.5, 80), { minLength: 2, maxLength: 40 })
-    .map((areas) => ({
-      shape: 'stage_table' as const,
-      points: areas.map((a, i) => ({ depth_m: i * 0.1, area_m2: a })),
-    })),
+  fc.array(len(0.5, 80), { minLength: 2, maxLength: 40 }).map((areas) => ({
+    shape: 'stage_table' as const,
+    points: areas.map((a, i) => ({ depth_m: i * 0.1, area_m2: a })),
+  })),
 );
 
 const outlet: fc.Arbitrary<OutletInput> = fc.oneof(
@@ -108,13 +106,18 @@ describe('solveDrain properties', () => {
         const r = solveDrain(req);
         expect(r.curve).toHaveLength(req.curve_points ?? 100);
         expect(r.curve[0].time_s).toBe(0);
-        for (let k = 1; k < r.curve.length && r.status !== 'no_flow'; k++) {
-          const [a, b] = [r.curve[k - 1], r.curve[k]];
-          expect(b.depth_m).toBeLessThan(a.depth_m);
-          expect(b.time_s).toBeGreaterThan(a.time_s);
-          expect(b.volume_m3).toBeLessThanOrEqual(a.volume_m3);
-          expect(Number.isFinite(b.time_s)).toBe(true);
-        }
+        // First row that breaks monotony (−1 when none), checked in plain code for speed.
+        const bad =
+          r.status === 'no_flow'
+            ? -1
+            : r.curve.findIndex((b, k) => {
+                if (k === 0) return false;
+                const a = r.curve[k - 1];
+                const ok =
+                  b.depth_m < a.depth_m && b.time_s > a.time_s && b.volume_m3 <= a.volume_m3;
+                return !(ok && Number.isFinite(b.time_s));
+              });
+        expect(bad).toBe(-1);
         expect(r.curve[r.curve.length - 1].depth_m).toBe(r.stop_depth_m);
       }),
       { numRuns: 150 },
