@@ -100,4 +100,12 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/api/support/**', access: 'support' },
   { pattern: '/support/audit', access: 'admin' },
   { pattern: '/api/support/audit', access: 'admin' },
+  { pattern: '/support/flags/[id]', access: 'support' },
+  { pattern: '/api/support/flags', access: 'support' },
+  { pattern: '/api/support/flags/[id]', access: 'support' },
+  { pattern: '/api/support/flags/[id]/notes', access: 'support' },
+  { pattern: '/api/support/flags/[id]/replies', access: 'support' },
+  { pattern: '/api/support/flags/[id]/rerun', access: 'support' },
+  // The reporter's e-mailed link: the token itself is the key, no sign-in.
+  { pattern: '/flags/[token]', access: 'anyone' },
 ];
