@@ -51,7 +51,8 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/guides/**', access: 'anyone' },
   { pattern: '/pricing', access: 'anyone' },
   { pattern: '/api/health', access: 'anyone' },
-  { pattern: '/api/v1/**', access: 'anyone' },
+  // Public calculation API: cookie-free and CORS-open, so no Origin check (API v1 answers 415 etc.).
+  { pattern: '/api/v1/**', access: 'anyone', originExempt: true },
 
   // Sign-in and invitations: open, but they look at who is visiting.
   { pattern: '/signin', access: 'anyone', session: 'optional' },
