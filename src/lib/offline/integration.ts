@@ -18,6 +18,8 @@ export function offlineCheck(): AstroIntegration {
       globPatterns: ['check/index.html', '_astro/*.{js,css,woff2}', 'favicon.svg', 'manifest.webmanifest'],
       manifestTransforms: [offlinePrecacheTransform(() => clientDir)],
       navigateFallback: null,
+      // The check keeps its inputs in the query string (share URL); any query maps to the page.
+      ignoreURLParametersMatching: [/.*/],
       navigateFallbackDenylist: [/^\/api\//, /^\/app(?:\/|$)/, /^\/support(?:\/|$)/],
       runtimeCaching: [],
       cleanupOutdatedCaches: true,
