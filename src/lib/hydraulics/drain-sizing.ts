@@ -66,6 +66,8 @@ export function smallestSizeForDrain(req: SizeForDrainRequest): SizeForDrainResu
     if (o.line.roughness_m !== undefined && o.line.roughness_m >= size.inner_diameter_m) continue;
     const result = solveDrain({ ...drain, outlet: outletWithSize(o, size) });
     if (result.status === 'drains' && result.time_s <= target) return { size, result };
+    // An uncovered intake or a lost head depends on levels only, never on the bore.
+    if (result.stop_reason === 'intake_uncovered' || result.stop_reason === 'no_head') break;
   }
   return { size: null, result: null };
 }

@@ -75,8 +75,11 @@ export function drainStop(outlets: OutletModel[], h0: number, hf: number): Drain
   const min = Math.min(...outlets.map((o) => o.cutoff));
   const atMin = outlets.filter((o) => o.cutoff === min);
   const asymptotic = atMin.every((o) => o.asymptotic);
+  // A final depth above an asymptotic stop is still reached in finite time.
+  if (hf > min || (hf === min && !asymptotic)) {
+    return { depth: hf, reason: 'final_depth', asymptotic: false, noFlow: false };
+  }
   const depth = min + (asymptotic ? ASYMPTOTIC_STANDOFF_M : 0);
-  if (hf >= depth) return { depth: hf, reason: 'final_depth', asymptotic: false, noFlow: false };
   return { depth, reason: atMin[0].reason, asymptotic, noFlow: depth >= h0 };
 }
 

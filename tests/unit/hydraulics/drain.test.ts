@@ -248,6 +248,13 @@ describe('solveDrain against scipy solve_ivp', () => {
     expect(r.warnings.map((w) => w.code)).toContain('siphon_breaks_during_drain');
   });
 
+  test('still reaches a final depth set inside the last millimetre above an asymptotic stop', () => {
+    // Same scipy solve_ivp set-up with the terminal event at 0.3005 m: 424636.79101360886 s.
+    const r = solveDrain({ ...odeCases[5][1], final_depth_m: 0.3005 });
+    expect(r.stop_reason).toBe('final_depth');
+    expect(rel(r.time_s, 424636.79101360886)).toBeLessThan(ODE_TOL);
+  });
+
   test('ends an asymptotic approach 1 mm above the stop and says so', () => {
     const r = solveDrain(odeCases[5][1]);
     expect(r.stop_depth_m).toBeCloseTo(0.301, 12);
