@@ -3,3 +3,4 @@ export * from './organisations';
 export * from './jobs';
 export * from './flags';
 export * from './brands';
+export * from './billing';
