@@ -11,6 +11,7 @@ import CautionNotes from './CautionNotes';
 import ChoiceButtons from './ChoiceButtons';
 import FigureList from './FigureList';
 import QuickInputs from './QuickInputs';
+import QuickFlagResult from './QuickFlagResult';
 import ShareLink from './ShareLink';
 import UnitToggle from './UnitToggle';
 import VerdictBanner from './VerdictBanner';
@@ -83,6 +84,7 @@ export default function QuickCheck(): ReactElement {
               <FigureList figures={answer.figures} system={system} />
               <Limits a={answer} system={system} />
               <WarningList warnings={answer.warnings} />
+              <QuickFlagResult state={state} answer={answer} system={system} />
             </section>
             <CautionNotes ids={answer.cautions} />
           </>
