@@ -6,7 +6,8 @@ import { flagMessages, flagSnapshots, flags } from './schema';
 
 // Invented flags for the invented demo firm (see db/seed.ts): one from a crew member, one from a
 // signed-out visitor, so the support desk has work to show. Fixed ids keep the seed idempotent.
-const AT = Date.UTC(2026, 10, 20, 9, 30, 0);
+// Ages count back from seeding time, so a fresh demo desk shows a day-old and a fresh flag.
+
 
 const tankWall: SiphonRequest = {
   fluid: { water_temperature_c: 18 },
@@ -69,7 +70,7 @@ function demoFlags(): DemoFlag[] {
 export function seedFlags(db: Db): void {
   db.transaction((tx) => {
     for (const d of demoFlags()) {
-      const at = new Date(AT - d.hoursAgo * 3_600_000);
+      const at = new Date(Date.now() - d.hoursAgo * 3_600_000);
       tx.insert(flags)
         .values({ ...d.flag, id: d.id, viewTokenHash: hashToken(newViewToken()), createdAt: at, updatedAt: at })
         .onConflictDoNothing()
@@ -86,7 +87,7 @@ export function seedFlags(db: Db): void {
         kind: 'note',
         authorUserId: 'usr_demo_support',
         body: 'Suggest a stage table from the shelf depths instead of one slope; ask for rough shelf widths.',
-        createdAt: new Date(AT - 4 * 3_600_000),
+        createdAt: new Date(Date.now() - 4 * 3_600_000),
       })
       .onConflictDoNothing()
       .run();
