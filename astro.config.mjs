@@ -3,6 +3,8 @@ import { defineConfig } from 'astro/config';
 import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
+import auth from 'auth-astro';
+import { fileURLToPath } from 'node:url';
 import { offlineCheck } from './src/lib/offline/integration.ts';
 
 // Host names the built server answers as. Astro ignores the Host header unless it matches one of
@@ -15,7 +17,12 @@ const allowedDomains = ['localhost', '127.0.0.1', ...(process.env.PUBLIC_HOSTNAM
 export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react(), offlineCheck()],
+  // Auth.js config lives under src/ (the top level is a fixed list of files).
+  integrations: [
+    react(),
+    offlineCheck(),
+    auth({ configFile: fileURLToPath(new URL('./src/lib/auth/auth.config.ts', import.meta.url)) }),
+  ],
   // Astro's checkOrigin would answer 403 to cross-site API v1 calls before our code runs; the
   // same rule is applied in src/middleware.ts (src/lib/api/origin-check.ts) to every other route.
   security: { checkOrigin: false, allowedDomains },
