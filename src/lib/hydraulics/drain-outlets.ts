@@ -5,7 +5,7 @@
 import { G } from './constants';
 import { drivingHead, lineFlowAtHead, resolveLine } from './line';
 import type { LineState, ResolvedLine } from './line';
-import { crestPressureAt, resolveCrest } from './siphon';
+import { crestPressureAt, defaultCrestLimit, resolveCrest } from './siphon';
 import { brentRoot } from './roots';
 import type {
   DrainStopReason,
@@ -36,6 +36,8 @@ export interface OutletModel {
   state?(h: number): LineState;
   /** The resolved line (line and siphon outlets only). */
   line?: ResolvedLine;
+  /** Siphon only: it starts with its crest below the practical default limit (a lower limit was given). */
+  nearLimitAtStart?: boolean;
 }
 
 export interface OutletContext {
@@ -158,6 +160,8 @@ function siphonModel(o: SiphonOutlet, path: string, ctx: OutletContext): OutletM
     crestPressureAt(crest, ctx.bottomM + h, m.state!(h)) - crest.limitPa;
   const top = ctx.initialDepthM;
   if (m.cutoff >= top) return m;
+  const startPa = crestPressureAt(crest, ctx.bottomM + top, m.state!(top));
+  m.nearLimitAtStart = startPa < defaultCrestLimit(ctx.atmosphericPa, ctx.fluid.vapor_pressure_pa);
   if (excess(top) <= 0)
     return { ...m, cutoff: Math.max(m.cutoff, top), reason: 'siphon_breaks', asymptotic: false };
   const steps = 32;

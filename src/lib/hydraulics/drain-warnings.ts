@@ -56,6 +56,9 @@ export function drainWarnings(
     else if (stopsOnTheWay) list.push(stopWarning(o, false));
     else if (stopsHere && stop.reason !== 'final_depth') list.push(stopWarning(o, true));
   }
+  if (outlets.some((o) => o.nearLimitAtStart && o.cutoff < h0)) {
+    list.push(makeWarning('siphon_near_limit'));
+  }
   if (stop.asymptotic) list.push(makeWarning('asymptotic_stop'));
   if (timeS > LONG_DRAIN_TIME_S) list.push(makeWarning('long_drain_time'));
   list.push(...lineWarnings(outlets, stop, h0));

@@ -248,6 +248,21 @@ describe('solveDrain against scipy solve_ivp', () => {
     expect(r.warnings.map((w) => w.code)).toContain('siphon_breaks_during_drain');
   });
 
+  test('warns when a siphon given a low limit starts below the practical default limit', () => {
+    // By hand: crest 7.7 m above the surface leaves about 101 325 − 75 400 − 8 000 ≈ 18 kPa at the
+    // crest, under the default p_v + 0.2·(p_atm − p_v) ≈ 21.6 kPa but above the 5 kPa given.
+    const base = odeCases[4][1];
+    const outlet = {
+      ...(base.outlet as object),
+      crest_elevation_m: 9.5,
+      min_crest_pressure_pa: 5000,
+    };
+    const r = solveDrain({ ...base, outlet } as DrainRequest);
+    expect(r.status).not.toBe('no_flow');
+    expect(r.warnings.map((w) => w.code)).toContain('siphon_near_limit');
+    expect(solveDrain(base).warnings.map((w) => w.code)).not.toContain('siphon_near_limit');
+  });
+
   test('still reaches a final depth set inside the last millimetre above an asymptotic stop', () => {
     // Same scipy solve_ivp set-up with the terminal event at 0.3005 m: 424636.79101360886 s.
     const r = solveDrain({ ...odeCases[5][1], final_depth_m: 0.3005 });
