@@ -1,0 +1,30 @@
+/**
+ * CORS for the public API: any origin may call it from a browser. No credentials are involved
+ * (the API sets and reads no cookies), so the wildcard origin is the right answer.
+ */
+
+const SHARED: Record<string, string> = {
+  'Access-Control-Allow-Origin': '*',
+  'Access-Control-Expose-Headers': 'Retry-After, X-Request-Id',
+};
+
+/** Add the CORS headers to a response (headers of Response.json answers are mutable). */
+export function withCors(response: Response): Response {
+  for (const [k, v] of Object.entries(SHARED)) response.headers.set(k, v);
+  return response;
+}
+
+/** Answer to a preflight OPTIONS request for a route allowing these methods. */
+export function preflight(methods: readonly string[]): Response {
+  const allowed = [...methods, 'OPTIONS'].join(', ');
+  return new Response(null, {
+    status: 204,
+    headers: {
+      ...SHARED,
+      Allow: allowed,
+      'Access-Control-Allow-Methods': allowed,
+      'Access-Control-Allow-Headers': 'Content-Type, X-Request-Id',
+      'Access-Control-Max-Age': '86400',
+    },
+  });
+}

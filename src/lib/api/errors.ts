@@ -1,0 +1,83 @@
+/**
+ * Error answers of API v1. All share one shape, `{ error, issues: [{ path, message }] }`, and
+ * none carries a stack trace or internal detail.
+ */
+import type { z } from 'zod';
+import type { ApiErrorCode, ApiIssue } from './schemas-responses';
+import { issueAt, toApiIssues } from './issues';
+
+/** A JSON error answer. */
+export function errorResponse(
+  status: number,
+  error: ApiErrorCode,
+  issues: ApiIssue[],
+  headers: Record<string, string> = {},
+): Response {
+  return Response.json(
+    { error, issues },
+    { status, headers: { 'Cache-Control': 'no-store', ...headers } },
+  );
+}
+
+/** 400: the request is not an input the API can compute with. */
+export function invalidInput(issues: ApiIssue[]): Response {
+  return errorResponse(400, 'invalid_input', issues);
+}
+
+/** Body of the 400 answer for a request that failed its zod schema. */
+export function invalidInputBody(
+  error: z.ZodError,
+  data: unknown,
+): { error: 'invalid_input'; issues: ApiIssue[] } {
+  return { error: 'invalid_input', issues: toApiIssues(error.issues, data) };
+}
+
+/** 400 for a problem with the body as a whole (not JSON, too deep, empty). */
+export function invalidBody(message: string): Response {
+  return invalidInput([issueAt('', message)]);
+}
+
+export function methodNotAllowed(allowed: readonly string[]): Response {
+  const allow = [...allowed, 'OPTIONS'].join(', ');
+  return errorResponse(
+    405,
+    'method_not_allowed',
+    [issueAt('', `this address answers ${allow} only`)],
+    { Allow: allow },
+  );
+}
+
+export function payloadTooLarge(limitBytes: number): Response {
+  return errorResponse(413, 'payload_too_large', [
+    issueAt('', `the body is larger than ${limitBytes / 1024} KiB`),
+  ]);
+}
+
+export function unsupportedMediaType(): Response {
+  return errorResponse(415, 'unsupported_media_type', [
+    issueAt('', 'send the body as JSON with Content-Type: application/json (UTF-8)'),
+  ]);
+}
+
+export function rateLimited(retryAfterS: number): Response {
+  return errorResponse(
+    429,
+    'rate_limited',
+    [issueAt('', `too many requests from this address; try again in ${retryAfterS} s`)],
+    { 'Retry-After': String(retryAfterS) },
+  );
+}
+
+/**
+ * 422: the input passed every check but the engine produced no usable answer (an engine bug or a
+ * case it cannot represent). Logged server-side with the request id; no detail leaves the server.
+ */
+export function cannotCompute(requestId?: string): Response {
+  const ref = requestId ? ` (request ${requestId})` : '';
+  return errorResponse(422, 'cannot_compute', [
+    issueAt(
+      '',
+      `the engine could not compute a result for this input${ref}; check the input or report it`,
+    ),
+  ]);
+}
