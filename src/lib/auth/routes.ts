@@ -29,7 +29,10 @@ export interface RouteRule {
   session?: 'skip' | 'optional';
   /** A catch-all default for paths nobody declared; does not count as declaring a route. */
   fallback?: boolean;
-  /** Server-to-server endpoints (signed webhooks) exempt from the browser Origin check. */
+  /**
+   * Exempt from the Origin check: server-to-server endpoints (signed webhooks) and the public,
+   * cookie-free API v1, which any site may call.
+   */
   originExempt?: boolean;
 }
 
