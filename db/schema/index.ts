@@ -4,3 +4,4 @@ export * from './jobs';
 export * from './flags';
 export * from './brands';
 export * from './billing';
+export * from './invitations';
