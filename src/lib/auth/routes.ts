@@ -73,6 +73,7 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/app/jobs', access: 'member' },
   { pattern: '/app/jobs/[id]', access: 'member' },
   { pattern: '/app/jobs/[id]/report', access: 'member' },
+  { pattern: '/app/jobs/[id]/report.pdf', access: 'member' },
   { pattern: '/app/flags', access: 'signed_in' },
   { pattern: '/app/flags/**', access: 'signed_in' },
 
@@ -88,6 +89,15 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/api/jobs/[id]', access: 'member' },
   { pattern: '/api/jobs/[id]/calculations', access: 'member' },
   { pattern: '/api/jobs/[id]/calculations/[cid]', access: 'member' },
+  { pattern: '/api/jobs/export', access: 'member' },
+  { pattern: '/api/jobs/[id]/shares', access: 'member' },
+  { pattern: '/api/jobs/[id]/shares/[sid]', access: 'member' },
+  { pattern: '/api/jobs/[id]/report/email', access: 'member' },
+  { pattern: '/api/brand', access: 'owner' },
+  { pattern: '/api/brand/logo', access: 'owner' },
+  // Read-only report links: the random token is the key; revocable and expiring.
+  { pattern: '/r/[token]', access: 'anyone' },
+  { pattern: '/r/[token]/report.pdf', access: 'anyone' },
   { pattern: '/api/export/**', access: 'member' },
 
   // Billing.
