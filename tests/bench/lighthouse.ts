@@ -1,0 +1,62 @@
+import * as chromeLauncher from 'chrome-launcher';
+import lighthouse from 'lighthouse';
+
+/** The same flags as tests/helpers/browser.ts: Debian's chromium, kept off the network. */
+const CHROME_FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface LighthouseScores {
+  perf: number;
+  a11y: number;
+}
+
+/** A Lighthouse runner on one Debian chromium; close it when done. */
+export interface LighthouseRunner {
+  /** Median over `runs` of the mobile performance and accessibility scores, 0–100. */
+  scores: (url: string, runs: number) => Promise<LighthouseScores>;
+  close: () => void;
+}
+
+/**
+ * Lighthouse's default run is mobile with simulated slow 4G and CPU throttling; it resets the
+ * origin's storage before each run, so one browser serves every page. The median of several
+ * runs smooths the noise of a busy machine.
+ */
+export async function openLighthouse(): Promise<LighthouseRunner> {
+  const chrome = await chromeLauncher.launch({
+    chromePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
+    chromeFlags: CHROME_FLAGS,
+  });
+  const once = async (url: string): Promise<LighthouseScores> => {
+    const result = await lighthouse(url, {
+      port: chrome.port,
+      output: 'json',
+      logLevel: 'error',
+      onlyCategories: ['performance', 'accessibility'],
+    });
+    const categories = result?.lhr.categories;
+    return {
+      perf: Math.round((categories?.performance?.score ?? 0) * 100),
+      a11y: Math.round((categories?.accessibility?.score ?? 0) * 100),
+    };
+  };
+  const scores = async (url: string, runs: number): Promise<LighthouseScores> => {
+    const all: LighthouseScores[] = [];
+    for (let i = 0; i < runs; i++) all.push(await once(url));
+    return { perf: median(all.map((s) => s.perf)), a11y: median(all.map((s) => s.a11y)) };
+  };
+  return { scores, close: () => chrome.kill() };
+}
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)];
+}

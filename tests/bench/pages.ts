@@ -1,0 +1,145 @@
+/**
+ * Page budgets on the built app in Debian's chromium (`npm run bench:pages`). Reported figures,
+ * not a timed test. For every public page: first-load JS (gzip), axe-core serious/critical
+ * findings, console errors, and Lighthouse mobile performance and accessibility.
+ *
+ * BENCH_URL=http://127.0.0.1:4321 measures a server already running; otherwise the real start
+ * command is run on port 46520 with a temp DATA_DIR. BENCH_SKIP_LIGHTHOUSE=1 skips Lighthouse;
+ * BENCH_LH_RUNS (default 3) sets how many Lighthouse runs each page's median is taken over.
+ */
+import { gzipSync } from 'node:zlib';
+import type { Browser } from 'playwright-core';
+import { seriousViolations } from '../helpers/axe';
+import { launchBrowser } from '../helpers/browser';
+import { startApp } from '../helpers/server';
+import type { StartedApp } from '../helpers/server';
+import { openLighthouse } from './lighthouse';
+
+const PAGES = [
+  '/',
+  '/check',
+  '/siphon',
+  '/gravity-line',
+  '/drain',
+  '/guides',
+  '/guides/priming-a-siphon',
+  '/pricing',
+  '/developers/api',
+  '/cautions',
+];
+
+const GOALS = { jsKb: 120, lighthouse: 95 };
+const LH_RUNS = Math.max(1, Number(process.env.BENCH_LH_RUNS) || 3);
+
+interface Row {
+  page: string;
+  status: number;
+  jsKb: number;
+  scripts: number;
+  axe: string[];
+  consoleErrors: string[];
+  perf?: number;
+  a11y?: number;
+}
+
+/** Load a page in a fresh phone-sized context (no service worker) and measure it. */
+async function measure(browser: Browser, base: string, path: string): Promise<Row> {
+  const context = await browser.newContext({
+    viewport: { width: 360, height: 740 },
+    deviceScaleFactor: 2,
+    isMobile: true,
+    hasTouch: true,
+    locale: 'en-GB',
+    serviceWorkers: 'block',
+  });
+  const page = await context.newPage();
+  const consoleErrors: string[] = [];
+  page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()));
+  page.on('pageerror', (e) => consoleErrors.push(e.message));
+  const pending: Promise<number>[] = [];
+  page.on('response', (res) => {
+    if (res.request().resourceType() !== 'script') return;
+    pending.push(scriptGzipBytes(res));
+  });
+  const response = await page.goto(base + path, { waitUntil: 'networkidle' });
+  const sizes = await Promise.all(pending);
+  const axe = (await seriousViolations(page)).map((v) => `${v.id} (${v.impact})`);
+  await context.close();
+  return {
+    page: path,
+    status: response?.status() ?? 0,
+    jsKb: sizes.reduce((a, b) => a + b, 0) / 1024,
+    scripts: sizes.length,
+    axe,
+    consoleErrors,
+  };
+}
+
+/** Bytes on the wire when the server compressed the script, else its gzip size (level 6). */
+async function scriptGzipBytes(res: import('playwright-core').Response): Promise<number> {
+  const encoding = (await res.headerValue('content-encoding')) ?? '';
+  if (/gzip|br|zstd/.test(encoding)) return (await res.request().sizes()).responseBodySize;
+  return gzipSync(await res.body()).length;
+}
+
+function mark(ok: boolean): string {
+  return ok ? ' ' : '✗';
+}
+
+function printTable(rows: Row[]): void {
+  const head = ['page', 'status', 'JS gz KB', 'axe s/c', 'console err', 'LH perf', 'LH a11y'];
+  const body = rows.map((r) => [
+    r.page,
+    String(r.status),
+    `${r.jsKb.toFixed(1)} (${r.scripts})${mark(r.jsKb <= GOALS.jsKb)}`,
+    `${r.axe.length}${mark(r.axe.length === 0)}`,
+    `${r.consoleErrors.length}${mark(r.consoleErrors.length === 0)}`,
+    r.perf === undefined ? '–' : `${r.perf}${mark(r.perf >= GOALS.lighthouse)}`,
+    r.a11y === undefined ? '–' : `${r.a11y}${mark(r.a11y >= GOALS.lighthouse)}`,
+  ]);
+  const widths = head.map((h, i) => Math.max(h.length, ...body.map((b) => b[i].length)));
+  const line = (cells: string[]): string =>
+    `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
+  console.log(line(head));
+  console.log(`|${widths.map((w) => '-'.repeat(w + 2)).join('|')}|`);
+  for (const b of body) console.log(line(b));
+  console.log(
+    `\nGoals: JS ≤ ${GOALS.jsKb} KB gzip, no serious/critical axe findings, no console errors,`,
+  );
+  console.log(
+    `Lighthouse mobile ≥ ${GOALS.lighthouse} (median of ${LH_RUNS}). ✗ marks a miss. JS column: KB (script count).`,
+  );
+  for (const r of rows) {
+    for (const a of r.axe) console.log(`  axe ${r.page}: ${a}`);
+    for (const e of r.consoleErrors) console.log(`  console ${r.page}: ${e.slice(0, 200)}`);
+  }
+}
+
+async function main(): Promise<void> {
+  let app: StartedApp | undefined;
+  const base = process.env.BENCH_URL ?? (app = await startApp(46520)).url;
+  const browser = await launchBrowser();
+  const rows: Row[] = [];
+  try {
+    for (const path of PAGES) rows.push(await measure(browser, base, path));
+    if (!process.env.BENCH_SKIP_LIGHTHOUSE) {
+      const lh = await openLighthouse();
+      try {
+        for (const row of rows) {
+          if (row.status === 200) Object.assign(row, await lh.scores(base + row.page, LH_RUNS));
+        }
+      } finally {
+        lh.close();
+      }
+    }
+  } finally {
+    await browser.close();
+    await app?.stop();
+  }
+  printTable(rows);
+}
+
+main().catch((e: unknown) => {
+  console.error(e);
+  process.exit(1);
+});
