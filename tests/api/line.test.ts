@@ -83,7 +83,12 @@ describe('POST /api/v1/line', () => {
 
   test('matches Hagen–Poiseuille with the energy equation for a laminar line (closed form, 1e-6)', async () => {
     // (1 + Ke)·V²/2g + 32·μ·L·V/(ρ·g·D²) = H: f = 64/Re makes friction head linear in V.
-    const rho = 1000, mu = 0.5, d = 0.02, l = 10, h = 1, ke = 0.5;
+    const rho = 1000,
+      mu = 0.5,
+      d = 0.02,
+      l = 10,
+      h = 1,
+      ke = 0.5;
     const a = (1 + ke) / (2 * G);
     const b = (32 * mu * l) / (rho * G * d * d);
     const v = (-b + Math.sqrt(b * b + 4 * a * h)) / (2 * a);
