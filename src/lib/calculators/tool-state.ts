@@ -13,7 +13,7 @@ export interface FittingRow {
 }
 
 export interface LineFieldsState {
-  [key: string]: string | number | boolean | FittingRow[];
+  [key: string]: string | number | boolean | Record<string, string | number>[];
   /** Catalogue size id, or 'custom' for `diameter_m`. */
   size: string;
   diameter_m: number;

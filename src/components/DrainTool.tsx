@@ -1,0 +1,101 @@
+import { lazy, useMemo } from 'react';
+import type { ReactElement } from 'react';
+import { drainHints } from '../lib/calculators/drain-hints';
+import type { DrainToolState } from '../lib/calculators/drain-tool';
+import { DRAIN_TOOL_DEFAULTS, STAGE_ROW, drainToolRequest } from '../lib/calculators/drain-tool';
+import { inputErrorText } from '../lib/calculators/field-names';
+import type { Figure } from '../lib/calculators/quick-result';
+import { FITTING_ROW } from '../lib/calculators/tool-state';
+import { drainVerdict } from '../lib/calculators/verdict';
+import type { DrainResult, UnitSystem } from '../lib/hydraulics';
+import { solveDrain } from '../lib/hydraulics';
+import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
+import CautionNotes from './CautionNotes';
+import ChartPanel from './ChartPanel';
+import DrainOutletFields from './DrainOutletFields';
+import DrawdownTable from './DrawdownTable';
+import FigureList from './FigureList';
+import NumberField from './NumberField';
+import ShareLink from './ShareLink';
+import TankSchematic from './TankSchematic';
+import ToolLayout, { HintList, InputGroup, InputProblem } from './ToolLayout';
+import VerdictBanner from './VerdictBanner';
+import VesselFields from './VesselFields';
+import WarningList from './WarningList';
+import WaterSiteFields from './WaterSiteFields';
+
+const DrawdownChart = lazy(() => import('./DrawdownChart'));
+
+const STOP_WORDS: Record<DrainResult['stop_reason'], string> = {
+  final_depth: 'it reaches the target depth',
+  intake_uncovered: 'the level reaches the intake or hole',
+  no_head: 'the head runs out (the level meets the outlet or tailwater)',
+  siphon_breaks: 'the siphon’s crest pressure reaches its limit',
+};
+
+function compute(s: DrainToolState, system: UnitSystem) {
+  try {
+    const req = drainToolRequest(s);
+    const r = solveDrain(req);
+    return { req, r, hints: drainHints(req, r, s.size, s.target_time_s, system) };
+  } catch (e) {
+    return { error: inputErrorText(e) };
+  }
+}
+
+function figures(r: DrainResult): Figure[] {
+  return [
+    { id: 'time', label: 'Time to the stop', kind: 'time', si: r.status === 'no_flow' ? Infinity : r.time_s },
+    { id: 'flow', label: 'Flow at the start', kind: 'flow', si: r.initial_flow_m3_s },
+    { id: 'mean-flow', label: 'Average flow', kind: 'flow', si: r.mean_flow_m3_s },
+    { id: 'volume', label: 'Water at the start', kind: 'volume', si: r.volume_initial_m3 },
+    { id: 'drained', label: 'Water moved', kind: 'volume', si: r.volume_drained_m3 },
+    { id: 'stop-depth', label: 'Depth at the stop', kind: 'length', si: r.stop_depth_m },
+  ];
+}
+
+/** The full drain-down tool: every vessel shape, every outlet, the drawdown curve, what would help. */
+export default function DrainTool(): ReactElement {
+  const system = useUnitSystem();
+  const { state: s, update, query } = useCalcState<DrainToolState>(DRAIN_TOOL_DEFAULTS, { fittings: FITTING_ROW, stage: STAGE_ROW });
+  const out = useMemo(() => compute(s, system), [s, system]);
+  const inputs = (
+    <>
+      <InputGroup title="Vessel, basin or pond">
+        <VesselFields s={s} update={update} system={system} />
+      </InputGroup>
+      <InputGroup title="Outlet">
+        <DrainOutletFields s={s} update={update} system={system} />
+      </InputGroup>
+      <InputGroup title="Water and site">
+        <WaterSiteFields s={s} update={update} system={system} />
+      </InputGroup>
+      <InputGroup title="Time you have (optional)">
+        <NumberField name="target_time_s" label="The job may take" kind="time" system={system} value={s.target_time_s} onChange={(v) => update({ target_time_s: v })} hint="0 for none" />
+      </InputGroup>
+    </>
+  );
+  const cautions = ['edges-and-confined-spaces', ...(s.outlet === 'siphon' ? ['no-mouth-priming'] : []), ...(s.outlet !== 'orifice' ? ['intake-entrapment'] : []), 'discharge', 'estimates'];
+  const result =
+    'error' in out ? (
+      <InputProblem text={out.error!} />
+    ) : (
+      <>
+        <VerdictBanner verdict={drainVerdict(out.r)} />
+        <FigureList figures={figures(out.r)} system={system} />
+        <p data-testid="limits">It stops when {STOP_WORDS[out.r.stop_reason]}.</p>
+        <WarningList warnings={out.r.warnings} />
+        <CautionNotes ids={cautions} />
+        <TankSchematic s={s} system={system} />
+        {out.r.status !== 'no_flow' && (
+          <ChartPanel
+            title="Drawdown"
+            table={<DrawdownTable curve={out.r.curve} system={system} />}
+            chart={() => <DrawdownChart curve={out.r.curve} system={system} />}
+          />
+        )}
+        <HintList hints={out.hints} />
+      </>
+    );
+  return <ToolLayout inputs={inputs} result={result} footer={<ShareLink query={query} />} />;
+}
