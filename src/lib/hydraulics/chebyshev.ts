@@ -34,7 +34,8 @@ function fit(f: (x: number) => number, a: number, b: number): Float64Array {
 
 /** Clenshaw evaluation of a piece at x (x within [a, b]). */
 export function evalPiece(p: ChebPiece, x: number): number {
-  const t = (2 * x - p.a - p.b) / (p.b - p.a);
+  const w = p.b - p.a;
+  const t = w > 0 ? (2 * x - p.a - p.b) / w : 0; // a piece of zero width is a constant
   const c = p.c;
   let b1 = 0;
   let b2 = 0;
@@ -76,7 +77,8 @@ export function chebFit(
     for (const item of pieces) {
       const { p } = item;
       const m = 0.5 * (p.a + p.b);
-      const stop = item.done || converged(p.c, relTol) || p.b - p.a <= minWidth || !(m > p.a && m < p.b);
+      const stop =
+        item.done || converged(p.c, relTol) || p.b - p.a <= minWidth || !(m > p.a && m < p.b);
       if (stop || count >= MAX_PIECES) {
         next.push({ p, done: true });
         continue;

@@ -92,14 +92,9 @@ export function drainTimes(geom: VesselGeometry, outlets: OutletModel[], rows: n
     const lo = points[i + 1];
     while (bands[b].lo > lo) b++;
     const band = bands[b];
-    t += integrateRel(
-      band.f,
-      Math.sqrt(lo - band.c),
-      Math.sqrt(points[i] - band.c),
-      REL_TOL,
-      0,
-      gk7,
-    );
+    const u0 = Math.sqrt(lo - band.c);
+    const u1 = Math.sqrt(points[i] - band.c);
+    if (u1 > u0) t += integrateRel(band.f, u0, u1, REL_TOL, 0, gk7);
     while (r < rows.length && rows[r] >= lo) times[r++] = t;
   }
   return times;

@@ -39,10 +39,26 @@ function prism(a: number, d: number): VesselGeometry {
 }
 
 /**
+ * Area of a circular segment of height x (0 ≤ x ≤ R) in a circle of radius R, m²:
+ * S = (R²/2)(θ − sin θ), θ = 4·asin(√(x/2R)) (= 2·acos((R − x)/R), written so that it keeps its
+ * precision for small x), θ − sin θ by its Taylor series below θ = 0.1 to avoid cancellation.
+ * Source: circular segment, standard handbook geometry.
+ */
+function segmentArea(r: number, x: number): number {
+  const theta = 4 * Math.asin(Math.sqrt(Math.min(1, x / (2 * r))));
+  const t2 = theta * theta;
+  const tms =
+    theta < 0.1
+      ? ((theta * t2) / 6) * (1 - (t2 / 20) * (1 - (t2 / 42) * (1 - t2 / 72)))
+      : theta - Math.sin(theta);
+  return 0.5 * r * r * tms;
+}
+
+/**
  * Horizontal cylinder with flat ends, diameter D = 2R, length L.
- * A = 2L·√(h(D − h)) (chord width × length);
- * V = L·[R²·acos((R − h)/R) − (R − h)·√(2Rh − h²)] (circular-segment area × length).
- * Valid 0 ≤ h ≤ D. Source: circular segment, standard handbook geometry.
+ * A = 2L·√(h(D − h)) (chord width × length); V = L·S(h) for h ≤ R and L·(πR² − S(D − h)) above,
+ * S the circular segment ({@link segmentArea}). Valid 0 ≤ h ≤ D.
+ * Source: circular segment, standard handbook geometry.
  */
 function horizontalCylinder(d: number, l: number): VesselGeometry {
   const r = d / 2;
@@ -52,8 +68,7 @@ function horizontalCylinder(d: number, l: number): VesselGeometry {
     area: (h) => 2 * l * Math.sqrt(c(h) * (d - c(h))),
     volume(h) {
       const x = c(h);
-      const cosArg = Math.min(1, Math.max(-1, (r - x) / r));
-      return l * (r * r * Math.acos(cosArg) - (r - x) * Math.sqrt(Math.max(0, x * (d - x))));
+      return l * (x <= r ? segmentArea(r, x) : Math.PI * r * r - segmentArea(r, d - x));
     },
     kinks: noKinks,
   };

@@ -56,6 +56,14 @@ describe('vesselGeometry', () => {
     }
   });
 
+  test('keeps its precision for a horizontal cylinder at a film of water', () => {
+    // For h ≪ D the segment is ∫₀ʰ 2√(Dx)·(1 − x/2D…) dx ≈ (4/3)√D·h^{3/2}, relative error ~h/D.
+    const g = vesselGeometry({ shape: 'horizontal_cylinder', diameter_m: 5, length_m: 2 });
+    for (const h of [1e-12, 1e-9, 1e-7]) {
+      expect(rel(g.volume(h), 2 * (4 / 3) * Math.sqrt(5) * h ** 1.5)).toBeLessThan(1e-6);
+    }
+  });
+
   test('matches the spherical cap πh(3a² + h²)/6 with base radius a² = h(2R − h)', () => {
     // Handbook cap formula in terms of the cap's base radius (a different form from the engine's).
     const g = vesselGeometry({ shape: 'sphere', diameter_m: 3 });
