@@ -33,7 +33,8 @@ export function stripeSpec(dataDir: string): FakeSpec {
       FAKE_STRIPE_PUBLIC_URL: process.env.FAKE_STRIPE_PUBLIC_URL || `http://127.0.0.1:${port}`,
       FAKE_STRIPE_WEBHOOK_URL: `${getConfig().publicUrl}/api/webhooks/stripe`,
       FAKE_STRIPE_WEBHOOK_SECRET: process.env.STRIPE_WEBHOOK_SECRET || FAKE_STRIPE_WEBHOOK_SECRET,
-      FAKE_STRIPE_CHAOS: process.env.FAKE_STRIPE_CHAOS ?? '0',
+      // Duplicated and reordered deliveries are on under the test runner, off otherwise.
+      FAKE_STRIPE_CHAOS: process.env.FAKE_STRIPE_CHAOS ?? (process.env.VITEST ? '1' : '0'),
     },
   };
 }
