@@ -1,9 +1,12 @@
-/**
- * Seats an organisation may fill (members plus open invitations). A constant until the billing
- * work replaces this with the number of seats paid for; callers only use seatLimit(orgId).
- */
-export const DEFAULT_SEAT_LIMIT = 10;
+import { getDb } from '../db/client';
+import { entitlementFor } from './entitlements';
 
-export function seatLimit(_orgId: string): number {
-  return DEFAULT_SEAT_LIMIT;
+/**
+ * Seats an organisation may fill (members plus open invitations): the seats paid for while the
+ * plan allows changes, else none (free, lapsed or read-only organisations invite nobody).
+ * Callers only use seatLimit(orgId).
+ */
+export function seatLimit(orgId: string): number {
+  const entitlement = entitlementFor(getDb(), orgId);
+  return entitlement.canWrite ? entitlement.seatsPaid : 0;
 }

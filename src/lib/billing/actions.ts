@@ -1,0 +1,235 @@
+import { eq } from 'drizzle-orm';
+import { billingCustomers } from '../../../db/schema';
+import type { Db } from '../db/client';
+import { seatsInUse } from '../data/invitations';
+import type { BillingInterval } from './plans';
+import { MAX_SEATS, TRIAL_DAYS } from './plans';
+import { proPriceIds } from './prices';
+import { currentSubscription } from './seat-floor';
+import { getStripe } from './stripe-client';
+import { PAYING, applySubscription, rowFrom } from './sync';
+import type { SubscriptionRow } from './sync';
+
+/** A refusal the billing API turns into JSON `{ error: code, message }` with this status. */
+export class BillingError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+interface Org {
+  id: string;
+  name: string;
+}
+
+/** The payments customer for an organisation, created on first checkout. */
+async function customerFor(db: Db, org: Org, email: string): Promise<string> {
+  const known = db
+    .select()
+    .from(billingCustomers)
+    .where(eq(billingCustomers.organisationId, org.id))
+    .get();
+  if (known) return known.customerId;
+  const customer = await getStripe().customers.create({
+    email,
+    name: org.name,
+    metadata: { organisation_id: org.id },
+  });
+  db.insert(billingCustomers)
+    .values({ organisationId: org.id, customerId: customer.id, createdAt: new Date() })
+    .onConflictDoNothing()
+    .run();
+  return db
+    .select()
+    .from(billingCustomers)
+    .where(eq(billingCustomers.organisationId, org.id))
+    .get()!.customerId;
+}
+
+function checkSeats(organisationId: string, seats: number): void {
+  const inUse = seatsInUse(organisationId);
+  if (!Number.isInteger(seats) || seats < 1 || seats > MAX_SEATS) {
+    throw new BillingError(
+      400,
+      'invalid_seats',
+      `Seats must be a whole number from 1 to ${MAX_SEATS}.`,
+    );
+  }
+  if (seats < inUse) {
+    throw new BillingError(
+      409,
+      'seats_below_members',
+      `${inUse} seats are in use (members and open invitations); remove someone first.`,
+    );
+  }
+}
+
+/** Start a checkout for the Crew plan; returns the hosted page's URL. The trial is for first-timers. */
+export async function startCheckout(
+  db: Db,
+  args: { org: Org; email: string; interval: BillingInterval; seats: number; origin: string },
+): Promise<string> {
+  const current = currentSubscription(db, args.org.id);
+  if (current && PAYING.includes(current.status)) {
+    throw new BillingError(
+      409,
+      'already_subscribed',
+      'This organisation already has a Crew plan; change seats instead.',
+    );
+  }
+  checkSeats(args.org.id, args.seats);
+  const stripe = getStripe();
+  const prices = await proPriceIds(stripe);
+  const customer = await customerFor(db, args.org, args.email);
+  const firstTime = !current;
+  const session = await stripe.checkout.sessions.create({
+    mode: 'subscription',
+    customer,
+    client_reference_id: args.org.id,
+    line_items: [{ price: prices[args.interval], quantity: args.seats }],
+    subscription_data: {
+      metadata: { organisation_id: args.org.id },
+      ...(firstTime ? { trial_period_days: TRIAL_DAYS } : {}),
+    },
+    success_url: `${args.origin}/app/billing?checkout=done&session={CHECKOUT_SESSION_ID}`,
+    cancel_url: `${args.origin}/app/billing?checkout=cancelled`,
+  });
+  if (!session.url)
+    throw new BillingError(
+      502,
+      'no_checkout_url',
+      'The payments service returned no checkout page.',
+    );
+  return session.url;
+}
+
+/** After the hosted checkout returns: read the new subscription now rather than wait for the event. */
+export async function syncCheckout(
+  db: Db,
+  organisationId: string,
+  sessionId: string,
+): Promise<void> {
+  const stripe = getStripe();
+  const session = await stripe.checkout.sessions.retrieve(sessionId);
+  if (session.client_reference_id !== organisationId || typeof session.subscription !== 'string')
+    return;
+  await syncSubscription(db, organisationId, session.subscription);
+}
+
+async function syncSubscription(
+  db: Db,
+  organisationId: string,
+  id: string,
+): Promise<SubscriptionRow> {
+  const askedAt = new Date();
+  const sub = await getStripe().subscriptions.retrieve(id);
+  const row = rowFrom(sub, organisationId, askedAt);
+  db.transaction((tx) => applySubscription(tx, row));
+  return row;
+}
+
+function liveSubscription(db: Db, organisationId: string): SubscriptionRow {
+  const sub = currentSubscription(db, organisationId);
+  if (!sub || !PAYING.includes(sub.status)) {
+    throw new BillingError(409, 'no_subscription', 'There is no running Crew plan to change.');
+  }
+  return sub;
+}
+
+/** Change the paid seats; never below the seats in use. */
+export async function changeSeats(
+  db: Db,
+  organisationId: string,
+  seats: number,
+): Promise<SubscriptionRow> {
+  const sub = liveSubscription(db, organisationId);
+  checkSeats(organisationId, seats);
+  await getStripe().subscriptions.update(sub.id, {
+    items: [{ id: sub.itemId, quantity: seats }],
+    proration_behavior: 'create_prorations',
+  });
+  return syncSubscription(db, organisationId, sub.id);
+}
+
+/** Cancel at the end of the period (default) or now. Data stays; the organisation turns read-only. */
+export async function cancelPlan(
+  db: Db,
+  organisationId: string,
+  when: 'period_end' | 'now',
+): Promise<SubscriptionRow> {
+  const sub = liveSubscription(db, organisationId);
+  if (when === 'now') await getStripe().subscriptions.cancel(sub.id);
+  else await getStripe().subscriptions.update(sub.id, { cancel_at_period_end: true });
+  return syncSubscription(db, organisationId, sub.id);
+}
+
+/** Take back a cancellation set for the end of the period. */
+export async function resumePlan(db: Db, organisationId: string): Promise<SubscriptionRow> {
+  const sub = liveSubscription(db, organisationId);
+  if (!sub.cancelAtPeriodEnd)
+    throw new BillingError(409, 'not_cancelling', 'The plan is not set to end.');
+  await getStripe().subscriptions.update(sub.id, { cancel_at_period_end: false });
+  return syncSubscription(db, organisationId, sub.id);
+}
+
+/** A hosted portal session for the organisation's customer. */
+export async function portalUrl(
+  db: Db,
+  organisationId: string,
+  returnUrl: string,
+): Promise<string> {
+  const known = db
+    .select()
+    .from(billingCustomers)
+    .where(eq(billingCustomers.organisationId, organisationId))
+    .get();
+  if (!known)
+    throw new BillingError(
+      409,
+      'no_customer',
+      'Start the Crew plan first; there is nothing to manage yet.',
+    );
+  const session = await getStripe().billingPortal.sessions.create({
+    customer: known.customerId,
+    return_url: returnUrl,
+  });
+  return session.url;
+}
+
+export interface InvoiceLine {
+  id: string;
+  number: string | null;
+  created: Date;
+  amount: number;
+  currency: string;
+  status: string | null;
+  url: string | null;
+}
+
+/** The latest invoices, newest first. */
+export async function listInvoices(
+  db: Db,
+  organisationId: string,
+  limit = 12,
+): Promise<InvoiceLine[]> {
+  const known = db
+    .select()
+    .from(billingCustomers)
+    .where(eq(billingCustomers.organisationId, organisationId))
+    .get();
+  if (!known) return [];
+  const list = await getStripe().invoices.list({ customer: known.customerId, limit });
+  return list.data.map((i) => ({
+    id: i.id ?? '',
+    number: i.number,
+    created: new Date(i.created * 1000),
+    amount: i.amount_due,
+    currency: i.currency,
+    status: i.status,
+    url: i.hosted_invoice_url ?? null,
+  }));
+}
