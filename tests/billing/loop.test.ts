@@ -1,0 +1,221 @@
+import { count, eq } from 'drizzle-orm';
+import Stripe from 'stripe';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { billingEvents, jobs } from '../../db/schema';
+import { FAKE_STRIPE_WEBHOOK_SECRET } from '../../fakes/stripe/spec';
+import type { Db } from '../../src/lib/db/client';
+import { startApp } from '../helpers/server';
+import type { StartedApp } from '../helpers/server';
+import {
+  ORG_ID,
+  OWNER_ID,
+  appDb,
+  asUser,
+  deliveriesSettled,
+  payWith,
+  sdkFor,
+  sessionFor,
+} from './helpers';
+
+// Ports from the billing range 46400–46499.
+const APP_PORT = 46401;
+const FAKE_PORT = 46411;
+const FAKE = `http://127.0.0.1:${FAKE_PORT}`;
+
+let app: StartedApp;
+let db: Db;
+let call: ReturnType<typeof asUser>;
+let stripe: Stripe;
+
+interface Summary {
+  entitlement: {
+    level: string;
+    canWrite: boolean;
+    canExport: boolean;
+    seatsPaid: number;
+    status: string;
+  };
+  seatsInUse: number;
+  subscription: { id: string; status: string; seats: number; cancelAtPeriodEnd: boolean } | null;
+}
+const summary = async (): Promise<Summary> =>
+  (await (await call('/api/billing/summary')).json()) as Summary;
+
+beforeAll(async () => {
+  app = await startApp(APP_PORT, {
+    FAKE_STRIPE_PORT: String(FAKE_PORT),
+    FAKE_RESEND_PORT: '46412',
+    FAKE_STRIPE_CHAOS: '1',
+    STRIPE_SECRET_KEY: '',
+    STRIPE_WEBHOOK_SECRET: '',
+  });
+  db = appDb(app.dataDir);
+  call = asUser(app.url, sessionFor(db, OWNER_ID));
+  stripe = sdkFor(FAKE_PORT);
+}, 120_000);
+
+afterAll(async () => {
+  db?.$client.close();
+  await app?.stop();
+});
+
+describe('billing loop against the payments fake', () => {
+  let checkoutUrl = '';
+
+  test('does start a checkout for the seeded owner, on the fake, with a seat quantity', async () => {
+    const before = await summary();
+    expect(before.subscription).toBeNull();
+    expect(before.seatsInUse).toBe(3); // seeded: owner and two crew
+    const low = await call('/api/billing/checkout', { json: { seats: 2, interval: 'month' } });
+    expect(low.status).toBe(409);
+    expect(((await low.json()) as { error: string }).error).toBe('seats_below_members');
+    const res = await call('/api/billing/checkout', { json: { seats: 4, interval: 'month' } });
+    expect(res.status).toBe(200);
+    checkoutUrl = ((await res.json()) as { url: string }).url;
+    expect(checkoutUrl.startsWith(`${FAKE}/pay/cs_test_`)).toBe(true);
+  });
+
+  test('does refuse the declining test card and change nothing', async () => {
+    const res = await payWith(checkoutUrl, '4000 0000 0000 0002');
+    expect(res.status).toBe(402);
+    expect(await res.text()).toContain('Your card was declined.');
+    await deliveriesSettled(FAKE);
+    expect((await summary()).subscription).toBeNull();
+  });
+
+  test('does give full access with a 14-day trial once the webhook lands', async () => {
+    const res = await payWith(checkoutUrl, '4242 4242 4242 4242');
+    expect(res.status).toBe(303);
+    expect(res.headers.get('location')).toContain(
+      `${app.url}/app/billing?checkout=done&session=cs_test_`,
+    );
+    await deliveriesSettled(FAKE);
+    const s = await summary();
+    expect(s.subscription?.status).toBe('trialing');
+    expect(s.entitlement).toMatchObject({ level: 'full', canWrite: true, seatsPaid: 4 });
+    const sub = await stripe.subscriptions.retrieve(s.subscription!.id);
+    expect(sub.trial_end! - sub.trial_start!).toBe(14 * 86_400);
+  });
+
+  test('does change seats through the SDK and refuse to go below the seats in use', async () => {
+    const low = await call('/api/billing/seats', { json: { seats: 2 } });
+    expect(low.status).toBe(409);
+    const ok = await call('/api/billing/seats', { json: { seats: 6 } });
+    expect(ok.status).toBe(200);
+    const s = await summary();
+    expect(s.entitlement.seatsPaid).toBe(6);
+    expect((await stripe.subscriptions.retrieve(s.subscription!.id)).items.data[0].quantity).toBe(
+      6,
+    );
+  });
+
+  test('does list invoices from the service', async () => {
+    const body = (await (await call('/api/billing/invoices')).json()) as {
+      invoices: { amount: number; status: string }[];
+    };
+    expect(body.invoices.length).toBeGreaterThanOrEqual(1);
+    expect(body.invoices.at(-1)).toMatchObject({ amount: 0, status: 'paid' }); // the trial's zero invoice
+  });
+
+  test('does put seats back up to the members when the portal sets fewer', async () => {
+    const portal = (await (await call('/api/billing/portal', { json: {} })).json()) as {
+      url: string;
+    };
+    expect(portal.url.startsWith(`${FAKE}/portal/`)).toBe(true);
+    const subId = (await summary()).subscription!.id;
+    const res = await fetch(`${portal.url}/seats`, {
+      method: 'POST',
+      body: new URLSearchParams({ subscription: subId, quantity: '1' }),
+      redirect: 'manual',
+    });
+    expect(res.status).toBe(303);
+    await deliveriesSettled(FAKE);
+    await new Promise((r) => setTimeout(r, 300));
+    await deliveriesSettled(FAKE);
+    expect((await stripe.subscriptions.retrieve(subId)).items.data[0].quantity).toBe(3);
+    expect((await summary()).entitlement.seatsPaid).toBe(3);
+  });
+
+  test('does turn read-only with export after cancelling in the portal, and keeps every job', async () => {
+    const portal = (await (await call('/api/billing/portal', { json: {} })).json()) as {
+      url: string;
+    };
+    const subId = (await summary()).subscription!.id;
+    const res = await fetch(`${portal.url}/cancel`, {
+      method: 'POST',
+      body: new URLSearchParams({ subscription: subId, when: 'now' }),
+      redirect: 'manual',
+    });
+    expect(res.status).toBe(303);
+    await deliveriesSettled(FAKE);
+    const s = await summary();
+    expect(s.subscription?.status).toBe('canceled');
+    expect(s.entitlement).toMatchObject({ level: 'read_only', canWrite: false, canExport: true });
+    const kept = db.select({ n: count() }).from(jobs).where(eq(jobs.organisationId, ORG_ID)).get();
+    expect(kept?.n).toBe(3); // the seeded jobs, untouched
+  });
+});
+
+describe('webhook endpoint', () => {
+  const post = (payload: string, header: string): Promise<Response> =>
+    fetch(`${app.url}/api/webhooks/stripe`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'stripe-signature': header },
+      body: payload,
+    });
+  const signed = (payload: string, secret = FAKE_STRIPE_WEBHOOK_SECRET): string =>
+    stripe.webhooks.generateTestHeaderString({ payload, secret });
+
+  test('does answer 400 to a forged signature and to none', async () => {
+    const payload = JSON.stringify({
+      id: 'evt_forged',
+      object: 'event',
+      type: 'customer.subscription.updated',
+      created: 1,
+      data: { object: {} },
+    });
+    expect((await post(payload, signed(payload, 'whsec_someone_else'))).status).toBe(400);
+    expect((await post(payload, 't=1,v1=deadbeef')).status).toBe(400);
+    const unsigned = {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: payload,
+    };
+    expect((await fetch(`${app.url}/api/webhooks/stripe`, unsigned)).status).toBe(400);
+    expect(
+      db.select().from(billingEvents).where(eq(billingEvents.id, 'evt_forged')).get(),
+    ).toBeUndefined();
+  });
+
+  test('does record each event id once: a replayed event changes nothing', async () => {
+    const events = (await (await fetch(`${FAKE}/_fake/deliveries`)).json()) as {
+      deliveries: { eventId: string; copies: number }[];
+    };
+    const first = events.deliveries[0].eventId;
+    expect(events.deliveries.some((d) => d.copies > 1)).toBe(true); // chaos did duplicate some
+    const event = await stripe.events.retrieve(first);
+    const payload = JSON.stringify(event);
+    const res = await post(payload, signed(payload));
+    expect(res.status).toBe(200);
+    expect(((await res.json()) as { outcome: string }).outcome).toBe('duplicate');
+    const rows = db
+      .select({ n: count() })
+      .from(billingEvents)
+      .where(eq(billingEvents.id, first))
+      .get();
+    expect(rows?.n).toBe(1);
+  });
+
+  test('does not roll back: a late copy of the trial-start event leaves the plan ended', async () => {
+    const all = (await (await fetch(`${FAKE}/_fake/deliveries`)).json()) as {
+      deliveries: { eventId: string; type: string }[];
+    };
+    const created = all.deliveries.find((d) => d.type === 'customer.subscription.created')!;
+    const old = await stripe.events.retrieve(created.eventId);
+    // The same stale content under a new id, as a late event from another source would arrive.
+    const late = JSON.stringify({ ...old, id: 'evt_late_copy_1', created: old.created + 1 });
+    const res = await post(late, signed(late));
+    expect(res.status).toBe(200);
+    expect((await summary()).entitlement.level).toBe('read_only');
+  });
+});
