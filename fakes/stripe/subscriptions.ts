@@ -141,7 +141,9 @@ export function settleInvoice(
   charge: boolean,
 ): boolean {
   const card = store.state.paymentMethods[sub.default_payment_method];
-  const ok = !charge || invoice.amount_due === 0 || card?.behaviour !== 'fail_later';
+  // A 'fail_later' card pays at sign-up and declines every charge after that.
+  const later = invoice.billing_reason !== 'subscription_create';
+  const ok = !charge || invoice.amount_due === 0 || !later || card?.behaviour !== 'fail_later';
   hooks.emit('invoice.created', invoice);
   if (ok) {
     Object.assign(invoice, {
@@ -217,12 +219,7 @@ export function advancePeriod(store: Store, hooks: Deliveries, sub: Obj): Obj {
     item.current_period_start = end;
     item.current_period_end = end + periodSeconds(item.price, end);
   }
-  const invoice = createInvoice(
-    store,
-    sub,
-    undefined,
-    wasPastDue ? 'subscription_cycle' : 'subscription_cycle',
-  );
+  const invoice = createInvoice(store, sub, undefined, 'subscription_cycle');
   const paid = settleInvoice(store, hooks, sub, invoice, true);
   sub.status = paid ? 'active' : wasPastDue ? 'unpaid' : 'past_due';
   if (previous.status !== sub.status) hooks.emit('customer.subscription.updated', sub, previous);

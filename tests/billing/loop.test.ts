@@ -1,7 +1,7 @@
 import { count, eq } from 'drizzle-orm';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { billingEvents, jobs } from '../../db/schema';
+import { billingEvents, jobs, subscriptions } from '../../db/schema';
 import { FAKE_STRIPE_WEBHOOK_SECRET } from '../../fakes/stripe/spec';
 import type { Db } from '../../src/lib/db/client';
 import { startApp } from '../helpers/server';
@@ -97,9 +97,21 @@ describe('billing loop against the payments fake', () => {
     expect(sub.trial_end! - sub.trial_start!).toBe(14 * 86_400);
   });
 
+  test('does stop invitations at the paid seats', async () => {
+    const first = await call('/api/team/invitations', {
+      json: { email: 'new.crew@heronsgate.example' },
+    });
+    expect(first.status).toBe(201);
+    const second = await call('/api/team/invitations', {
+      json: { email: 'one.more@heronsgate.example' },
+    });
+    expect(((await second.json()) as { error: string }).error).toBe('seat_limit'); // 3 members + 1 invited = 4 paid
+    expect((await summary()).seatsInUse).toBe(4);
+  });
+
   test('does change seats through the SDK and refuse to go below the seats in use', async () => {
-    const low = await call('/api/billing/seats', { json: { seats: 2 } });
-    expect(low.status).toBe(409);
+    const low = await call('/api/billing/seats', { json: { seats: 3 } });
+    expect(low.status).toBe(409); // 4 in use
     const ok = await call('/api/billing/seats', { json: { seats: 6 } });
     expect(ok.status).toBe(200);
     const s = await summary();
@@ -132,8 +144,8 @@ describe('billing loop against the payments fake', () => {
     await deliveriesSettled(FAKE);
     await new Promise((r) => setTimeout(r, 300));
     await deliveriesSettled(FAKE);
-    expect((await stripe.subscriptions.retrieve(subId)).items.data[0].quantity).toBe(3);
-    expect((await summary()).entitlement.seatsPaid).toBe(3);
+    expect((await stripe.subscriptions.retrieve(subId)).items.data[0].quantity).toBe(4);
+    expect((await summary()).entitlement.seatsPaid).toBe(4);
   });
 
   test('does turn read-only with export after cancelling in the portal, and keeps every job', async () => {
@@ -151,8 +163,35 @@ describe('billing loop against the payments fake', () => {
     const s = await summary();
     expect(s.subscription?.status).toBe('canceled');
     expect(s.entitlement).toMatchObject({ level: 'read_only', canWrite: false, canExport: true });
+    const invite = await call('/api/team/invitations', {
+      json: { email: 'late@heronsgate.example' },
+    });
+    expect(((await invite.json()) as { error: string }).error).toBe('seat_limit');
     const kept = db.select({ n: count() }).from(jobs).where(eq(jobs.organisationId, ORG_ID)).get();
     expect(kept?.n).toBe(3); // the seeded jobs, untouched
+  });
+});
+
+describe('a card that fails after sign-up', () => {
+  test('does restart without a trial, fall past due with a banner, then turn read-only when unpaid', async () => {
+    const res = await call('/api/billing/checkout', { json: { seats: 4, interval: 'year' } });
+    const { url } = (await res.json()) as { url: string };
+    expect((await payWith(url, '4000 0000 0000 0341')).status).toBe(303);
+    await deliveriesSettled(FAKE);
+    const started = await summary();
+    expect(started.subscription?.status).toBe('active'); // a returning customer gets no second trial
+    const id = started.subscription!.id;
+    await fetch(`${FAKE}/_fake/subscriptions/${id}/advance`, { method: 'POST' });
+    await deliveriesSettled(FAKE);
+    const late = await summary();
+    expect(late.subscription?.status).toBe('past_due');
+    expect(late.entitlement).toMatchObject({ level: 'full', canWrite: true });
+    expect((late.entitlement as { banner?: string }).banner).toContain('Crew payment failed');
+    await fetch(`${FAKE}/_fake/subscriptions/${id}/advance`, { method: 'POST' });
+    await deliveriesSettled(FAKE);
+    const unpaid = await summary();
+    expect(unpaid.subscription?.status).toBe('unpaid');
+    expect(unpaid.entitlement).toMatchObject({ level: 'read_only', canExport: true });
   });
 });
 
@@ -210,12 +249,16 @@ describe('webhook endpoint', () => {
     const all = (await (await fetch(`${FAKE}/_fake/deliveries`)).json()) as {
       deliveries: { eventId: string; type: string }[];
     };
-    const created = all.deliveries.find((d) => d.type === 'customer.subscription.created')!;
+    const created = all.deliveries.find((d) => d.type === 'customer.subscription.created')!; // the trial's
     const old = await stripe.events.retrieve(created.eventId);
     // The same stale content under a new id, as a late event from another source would arrive.
     const late = JSON.stringify({ ...old, id: 'evt_late_copy_1', created: old.created + 1 });
     const res = await post(late, signed(late));
     expect(res.status).toBe(200);
+    const subId = (old.data.object as { id: string }).id;
+    expect(db.select().from(subscriptions).where(eq(subscriptions.id, subId)).get()?.status).toBe(
+      'canceled',
+    );
     expect((await summary()).entitlement.level).toBe('read_only');
   });
 });

@@ -4,7 +4,7 @@ import type { SubscriptionStatus } from '../../../db/schema';
 import type { Db } from '../db/client';
 import { getDb } from '../db/client';
 import { GRACE_DAYS, GRANTED_SEATS, PLAN_NAMES } from './plans';
-import { currentSubscription, seatsInUse } from './seat-floor';
+import { currentSubscription } from './seat-floor';
 
 /**
  * THE place that decides what an organisation may do with Pro features. Every Pro endpoint and
@@ -150,10 +150,4 @@ export function requirePro(
   if (!locals.organisation)
     return Response.json({ error: 'plan_required', message: 'No organisation.' }, { status: 403 });
   return planRefusal(entitlementFor(db, locals.organisation.id), need);
-}
-
-/** Whether one more member may be added (invitation or acceptance). */
-export function canAddSeat(db: Db, organisationId: string, pending = 0): boolean {
-  const e = entitlementFor(db, organisationId);
-  return e.canWrite && seatsInUse(db, organisationId) + pending < e.seatsPaid;
 }

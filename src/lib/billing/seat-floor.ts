@@ -1,19 +1,10 @@
-import { count, desc, eq } from 'drizzle-orm';
+import { desc, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
-import { memberships, subscriptions } from '../../../db/schema';
+import { subscriptions } from '../../../db/schema';
 import type { Db } from '../db/client';
+import { seatsInUse as seatsTaken } from '../data/invitations';
 import { PAYING, applySubscription, rowFrom } from './sync';
 import type { SubscriptionRow } from './sync';
-
-/** Seats taken: every member of the organisation, the owner included. */
-export function seatsInUse(db: Db, organisationId: string): number {
-  const row = db
-    .select({ n: count() })
-    .from(memberships)
-    .where(eq(memberships.organisationId, organisationId))
-    .get();
-  return row?.n ?? 0;
-}
 
 /**
  * The organisation's current subscription: the newest one still paying, else the newest of any
@@ -30,8 +21,8 @@ export function currentSubscription(db: Db, organisationId: string): Subscriptio
 }
 
 /**
- * Paid seats never fall below the members in use: when a change made elsewhere (the hosted
- * portal) leaves fewer seats than members, put the quantity back up to the member count.
+ * Paid seats never fall below the seats in use (members and open invitations): when a change made
+ * elsewhere (the hosted portal) leaves fewer, put the quantity back up to the seats in use.
  */
 export async function keepSeatsAboveMembers(
   db: Db,
@@ -40,7 +31,7 @@ export async function keepSeatsAboveMembers(
 ): Promise<void> {
   const sub = currentSubscription(db, organisationId);
   if (!sub || !PAYING.includes(sub.status)) return;
-  const inUse = seatsInUse(db, organisationId);
+  const inUse = seatsTaken(organisationId);
   if (sub.seats >= inUse) return;
   const askedAt = new Date();
   const updated = await stripe.subscriptions.update(sub.id, {
