@@ -19,6 +19,8 @@ export interface DeliveryRecord {
   status: 'pending' | 'delivered' | 'failed';
   lastStatus?: number;
   copies: number;
+  /** Position in arrival order of its first successful delivery (shows reordering). */
+  arrival?: number;
 }
 
 const signer = new Stripe('sk_fake_signer');
@@ -31,6 +33,7 @@ export class Deliveries {
   private batch: Obj[] = [];
   private batchTimer: NodeJS.Timeout | undefined;
   private seed = 20261201;
+  private arrivals = 0;
 
   constructor(
     private readonly store: Store,
@@ -126,6 +129,7 @@ export class Deliveries {
       record.lastStatus = res?.status;
       await res?.arrayBuffer().catch(() => undefined);
       if (res && res.status >= 200 && res.status < 300) {
+        if (record.status !== 'delivered') record.arrival = ++this.arrivals;
         record.status = 'delivered';
         return;
       }
