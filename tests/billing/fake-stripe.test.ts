@@ -106,11 +106,7 @@ describe('payments fake', () => {
     const subId = (await stripe.checkout.sessions.retrieve(session.id)).subscription as string;
     await stripe.subscriptions.update(subId, { cancel_at_period_end: true });
     await stripe.subscriptions.update(subId, { cancel_at_period_end: false });
-    const log = (await deliveriesSettled(`http://127.0.0.1:${FAKE_PORT}`)) as {
-      status: string;
-      attempts: number;
-      arrival?: number;
-    }[];
+    const log = await deliveriesSettled(`http://127.0.0.1:${FAKE_PORT}`);
     expect(log.every((d) => d.status === 'delivered')).toBe(true);
     expect(log.some((d) => d.attempts > 1)).toBe(true); // the receiver's two failures were retried
     const unique = new Set(received.map((r) => r.id));

@@ -52,16 +52,25 @@ export function sdkFor(port: number): Stripe {
   });
 }
 
+export interface Delivery {
+  eventId: string;
+  type: string;
+  status: string;
+  copies: number;
+  attempts: number;
+  arrival?: number;
+}
+
 /** Wait until the fake has no delivery pending (retries included). */
 export async function deliveriesSettled(
   fakeUrl: string,
   timeoutMs = 20_000,
-): Promise<{ eventId: string; type: string; status: string; copies: number }[]> {
+): Promise<Delivery[]> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const body = (await (await fetch(`${fakeUrl}/_fake/deliveries`)).json()) as {
       pending: number;
-      deliveries: { eventId: string; type: string; status: string; copies: number }[];
+      deliveries: Delivery[];
     };
     if (body.pending === 0) return body.deliveries;
     await new Promise((r) => setTimeout(r, 100));
