@@ -75,6 +75,13 @@ describe('billing loop against the payments fake', () => {
     expect(checkoutUrl.startsWith(`${FAKE}/pay/cs_test_`)).toBe(true);
   });
 
+  test('does keep billing to the owner: crew get 403', async () => {
+    const crew = asUser(app.url, sessionFor(db, 'usr_demo_crew1'));
+    expect((await crew('/api/billing/summary')).status).toBe(403);
+    expect((await crew('/api/billing/checkout', { json: { seats: 9 } })).status).toBe(403);
+    expect((await crew('/app/billing')).status).toBe(403);
+  });
+
   test('does refuse the declining test card and change nothing', async () => {
     const res = await payWith(checkoutUrl, '4000 0000 0000 0002');
     expect(res.status).toBe(402);

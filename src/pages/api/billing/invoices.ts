@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { listInvoices } from '../../../lib/billing/actions';
+import { listInvoices } from '../../../lib/billing/invoices';
 import { billingRoute } from '../../../lib/billing/http';
 import { getDb } from '../../../lib/db/client';
 

@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { portalUrl } from '../../../lib/billing/actions';
+import { portalUrl } from '../../../lib/billing/invoices';
 import { billingRoute } from '../../../lib/billing/http';
 import { getDb } from '../../../lib/db/client';
 
