@@ -1,4 +1,6 @@
+import { checkCard } from './cards';
 import type { FormObject } from './form';
+import { replaceCard } from './invoices';
 import { str } from './form';
 import { portalPage } from './pages';
 import type { Obj, Store } from './store';
@@ -14,7 +16,7 @@ const json = (status: number, body: unknown): Reply => ({
   body: JSON.stringify(body),
 });
 
-/** Portal form posts: change seats, cancel (at period end or now), resume. */
+/** Portal form posts: change seats, cancel (at period end or now), resume, pay with another card. */
 export function portalAction(
   store: Store,
   hooks: Deliveries,
@@ -42,6 +44,16 @@ export function portalAction(
       else updateSubscription(store, hooks, sub, { cancelAtPeriodEnd: true });
     } else if (action === 'resume') {
       updateSubscription(store, hooks, sub, { cancelAtPeriodEnd: false });
+    } else if (action === 'card') {
+      const card = checkCard(
+        str(form, 'number') ?? '',
+        str(form, 'expiry') ?? '',
+        str(form, 'cvc') ?? '',
+        store.now() * 1000,
+      );
+      if (!card.ok) throw new StripeFakeError(402, 'card_error', card.message);
+      if (!replaceCard(store, hooks, sub, card))
+        throw new StripeFakeError(402, 'card_error', 'The new card was declined too.');
     } else {
       return { status: 404, type: 'text/plain', body: 'Unknown portal action' };
     }

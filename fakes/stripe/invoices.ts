@@ -76,3 +76,42 @@ export function settleInvoice(
   }
   return ok;
 }
+
+/**
+ * The portal's "pay with another card": the new card becomes the default and the open invoice is
+ * charged again; paid brings a past-due or unpaid subscription back to active.
+ */
+export function replaceCard(
+  store: Store,
+  hooks: Deliveries,
+  sub: Obj,
+  card: { behaviour: string; last4: string; brand: string },
+): boolean {
+  const pm = {
+    id: newId('pm'),
+    object: 'payment_method',
+    type: 'card',
+    customer: sub.customer,
+    card: { brand: card.brand, last4: card.last4 },
+    behaviour: card.behaviour,
+  };
+  store.state.paymentMethods[pm.id] = pm;
+  sub.default_payment_method = pm.id;
+  const open = store.state.invoices[sub.latest_invoice];
+  if (!open || open.status !== 'open') {
+    store.save();
+    return true;
+  }
+  const paid = card.behaviour !== 'fail_later';
+  if (paid) {
+    Object.assign(open, { status: 'paid', amount_paid: open.amount_due, amount_remaining: 0 });
+    hooks.emit('invoice.paid', open);
+    const previous = { status: sub.status };
+    sub.status = 'active';
+    hooks.emit('customer.subscription.updated', sub, previous);
+  } else {
+    hooks.emit('invoice.payment_failed', open);
+  }
+  store.save();
+  return paid;
+}

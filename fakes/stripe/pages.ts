@@ -70,6 +70,14 @@ ${
     : ''
 }
 ${live && sub.cancel_at_period_end ? `<form method="post" action="${action('resume')}">${hidden}<button type="submit">Keep subscription</button></form>` : ''}
+${
+  ['past_due', 'unpaid'].includes(sub.status)
+    ? `<form method="post" action="${action('card')}">${hidden}<h3>Pay with another card</h3>
+<label for="number">Card number</label><input id="number" name="number" inputmode="numeric" autocomplete="cc-number" required>
+<div class="row"><div><label for="expiry">Expiry</label><input id="expiry" name="expiry" placeholder="MM / YY" inputmode="numeric" required></div>
+<div><label for="cvc">CVC</label><input id="cvc" name="cvc" inputmode="numeric" required></div></div><button type="submit">Pay now</button></form>`
+    : ''
+}
 </section>`;
 }
 

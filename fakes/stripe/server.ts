@@ -85,7 +85,7 @@ async function route(req: http.IncomingMessage, url: URL): Promise<Reply> {
   }
   if (pay && method === 'POST')
     return hostedPay(pay[1], Object.fromEntries(new URLSearchParams(raw)));
-  const portal = /^\/portal\/(\w+)(?:\/(seats|cancel|resume))?$/.exec(url.pathname);
+  const portal = /^\/portal\/(\w+)(?:\/(seats|cancel|resume|card))?$/.exec(url.pathname);
   if (portal && method === 'GET' && !portal[2])
     return html(store.state.portalSessions[portal[1]] ? 200 : 404, portalPage(store, portal[1]));
   if (portal && method === 'POST' && portal[2])

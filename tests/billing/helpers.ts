@@ -62,10 +62,7 @@ export interface Delivery {
 }
 
 /** Wait until the fake has no delivery pending (retries included). */
-export async function deliveriesSettled(
-  fakeUrl: string,
-  timeoutMs = 20_000,
-): Promise<Delivery[]> {
+export async function deliveriesSettled(fakeUrl: string, timeoutMs = 20_000): Promise<Delivery[]> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const body = (await (await fetch(`${fakeUrl}/_fake/deliveries`)).json()) as {

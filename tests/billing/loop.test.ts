@@ -180,7 +180,7 @@ describe('billing loop against the payments fake', () => {
 });
 
 describe('a card that fails after sign-up', () => {
-  test('does restart without a trial, fall past due with a banner, then turn read-only when unpaid', async () => {
+  test('does restart without a trial, fall past due with a banner, turn read-only when unpaid, recover on a new card', async () => {
     const res = await call('/api/billing/checkout', { json: { seats: 4, interval: 'year' } });
     const { url } = (await res.json()) as { url: string };
     expect((await payWith(url, '4000 0000 0000 0341')).status).toBe(303);
@@ -199,6 +199,19 @@ describe('a card that fails after sign-up', () => {
     const unpaid = await summary();
     expect(unpaid.subscription?.status).toBe('unpaid');
     expect(unpaid.entitlement).toMatchObject({ level: 'read_only', canExport: true });
+    // Paying with another card in the portal brings the plan back.
+    const portal = (await (await call('/api/billing/portal', { json: {} })).json()) as {
+      url: string;
+    };
+    const card = { subscription: id, number: '4242 4242 4242 4242', expiry: '12 / 34', cvc: '123' };
+    const paid = await fetch(`${portal.url}/card`, {
+      method: 'POST',
+      body: new URLSearchParams(card),
+      redirect: 'manual',
+    });
+    expect(paid.status).toBe(303);
+    await deliveriesSettled(FAKE);
+    expect((await summary()).entitlement).toMatchObject({ level: 'full', status: 'active' });
   });
 });
 
@@ -252,7 +265,7 @@ describe('webhook endpoint', () => {
     expect(rows?.n).toBe(1);
   });
 
-  test('does not roll back: a late copy of the trial-start event leaves the plan ended', async () => {
+  test('does not roll back: a late copy of the trial-start event leaves that subscription ended', async () => {
     const all = (await (await fetch(`${FAKE}/_fake/deliveries`)).json()) as {
       deliveries: { eventId: string; type: string }[];
     };
@@ -266,6 +279,6 @@ describe('webhook endpoint', () => {
     expect(db.select().from(subscriptions).where(eq(subscriptions.id, subId)).get()?.status).toBe(
       'canceled',
     );
-    expect((await summary()).entitlement.level).toBe('read_only');
+    expect((await summary()).subscription?.status).toBe('active'); // the newer plan, untouched
   });
 });
