@@ -1,18 +1,20 @@
+import { entitlementFor } from '../billing/entitlements';
+import type { Entitlement } from '../billing/entitlements';
+import { getDb } from '../db/client';
+
 /**
- * What the current organisation may do with saved jobs. The one entitlement check lives in
- * src/lib/billing/entitlements.ts; this file only maps its answer onto job actions so every jobs
- * endpoint and page asks the same question.
+ * Jobs ask the one entitlement check (src/lib/billing/entitlements.ts): full may change jobs;
+ * read-only may open and export them; none (free plan) has no saved jobs to open. Export is
+ * always allowed, so nobody is ever locked out of their own records.
  */
-export type JobsLevel = 'full' | 'read_only' | 'none';
+export type JobsNeed = 'read' | 'write' | 'export';
 
-type Org = NonNullable<App.Locals['organisation']>;
-
-/** The entitlement level for jobs (until billing answers: Pro plan = full, else read-only). */
-export function jobsLevel(org: Org): JobsLevel {
-  return org.plan === 'pro' ? 'full' : 'read_only';
+export function jobsEntitlement(orgId: string): Entitlement {
+  return entitlementFor(getDb(), orgId);
 }
 
-/** Saving, editing, deleting, e-mailing and sharing need a full entitlement. */
-export function canWriteJobs(org: Org): boolean {
-  return jobsLevel(org) === 'full';
+export function allows(e: Entitlement, need: JobsNeed): boolean {
+  if (need === 'export') return true;
+  if (need === 'read') return e.level !== 'none';
+  return e.canWrite;
 }

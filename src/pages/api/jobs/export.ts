@@ -10,7 +10,7 @@ const query = z.strictObject({ format: z.enum(['csv', 'json']).default('json') }
 /** All jobs and calculations as CSV or JSON: always allowed, read-only accounts included. */
 export const GET: APIRoute = ({ locals, url }) =>
   handle(() => {
-    const viewer = jobsViewer(locals);
+    const viewer = jobsViewer(locals, 'export');
     const { format } = parseWith(query, queryObject(url));
     const day = new Date().toISOString().slice(0, 10);
     const headers = {
