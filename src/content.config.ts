@@ -12,9 +12,7 @@ const guides = defineCollection({
     /** Date the guide was last checked. */
     updated: z.coerce.date(),
     /** The tool the guide points a reader to. */
-    tool: z
-      .object({ href: z.string().startsWith('/'), label: z.string() })
-      .optional(),
+    tool: z.object({ href: z.string().startsWith('/'), label: z.string() }).optional(),
   }),
 });
 
