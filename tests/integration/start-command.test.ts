@@ -24,6 +24,18 @@ describe('npm start', () => {
     expect(await health.json()).toEqual({ status: 'ok', version: expect.any(String) });
   });
 
+  test('sends the security headers on pages, static files and API answers', async () => {
+    for (const route of ['/', '/favicon.svg', '/api/health', '/no-such-page']) {
+      const res = await fetch(`${app.url}${route}`);
+      expect(res.headers.get('x-content-type-options'), route).toBe('nosniff');
+      expect(res.headers.get('content-security-policy'), route).toContain("frame-ancestors 'none'");
+      expect(res.headers.get('content-security-policy'), route).toContain("object-src 'none'");
+      expect(res.headers.get('referrer-policy'), route).toBe('strict-origin-when-cross-origin');
+      // HSTS only in production, where the site is served over HTTPS.
+      expect(res.headers.get('strict-transport-security'), route).toBeNull();
+    }
+  });
+
   test('answers an unknown address with the 404 page', async () => {
     const res = await fetch(`${app.url}/no-such-page`);
     expect(res.status).toBe(404);

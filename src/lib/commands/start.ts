@@ -87,7 +87,8 @@ function startServer(host: string, port: number): ChildProcess {
   if (dev) {
     return spawn(astroBin, ['dev', '--host', host, '--port', String(port)], { stdio: 'inherit', env });
   }
-  return spawn(process.execPath, [path.join(root, 'dist', 'server', 'entry.mjs')], { stdio: 'inherit', env });
+  const serve = path.join(root, 'src', 'lib', 'commands', 'serve.ts');
+  return spawn(process.execPath, ['--import', 'tsx', serve], { stdio: 'inherit', env });
 }
 
 function printBanner(url: string, seeded: boolean, fakes: { name: string; url: string }[]): void {

@@ -35,6 +35,8 @@ export function getDb(): Db {
     const db = openDatabase(getConfig().databaseFile);
     runMigrations(db);
     shared = db;
+    // Checkpoint the WAL and release the file however the process ends (graceful shutdown).
+    process.once('exit', closeDb);
   }
   return shared;
 }

@@ -1,0 +1,51 @@
+/**
+ * The production server: Astro's built handler (static files, then pages and endpoints) inside
+ * our own node:http server, so that every response carries the security headers and SIGTERM
+ * finishes in-flight requests before the process exits.
+ */
+import http from 'node:http';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { getConfig } from '../config';
+import { securityHeaders } from '../server/security-headers';
+
+type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
+
+const GRACE_MS = 10_000;
+
+async function main(): Promise<void> {
+  process.env.ASTRO_NODE_AUTOSTART = 'disabled';
+  const config = getConfig();
+  const entry = pathToFileURL(path.resolve('dist/server/entry.mjs')).href;
+  const { handler } = (await import(entry)) as { handler: Handler };
+  const headers = Object.entries(securityHeaders(config.production));
+
+  const server = http.createServer((req, res) => {
+    for (const [name, value] of headers) res.setHeader(name, value);
+    handler(req, res);
+  });
+  server.keepAliveTimeout = 5_000;
+  server.listen(config.port, config.host, () => {
+    console.log(`Server listening on http://${config.host}:${config.port}`);
+  });
+
+  let closing = false;
+  const close = (): void => {
+    if (closing) return;
+    closing = true;
+    // Stop accepting, let in-flight requests finish, drop idle keep-alive sockets.
+    server.close(() => process.exit(0));
+    server.closeIdleConnections();
+    setTimeout(() => {
+      server.closeAllConnections();
+      process.exit(0);
+    }, GRACE_MS).unref();
+  };
+  process.on('SIGTERM', close);
+  process.on('SIGINT', close);
+}
+
+main().catch((error: unknown) => {
+  console.error(`Server failed to start: ${error instanceof Error ? error.message : String(error)}`);
+  process.exit(1);
+});
