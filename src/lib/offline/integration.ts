@@ -11,6 +11,8 @@ import { offlinePrecacheTransform } from './precache';
 export function offlineCheck(): AstroIntegration {
   let clientDir: URL | undefined;
   const pwa = AstroPWA({
+    // Workbox otherwise follows NODE_ENV, and test runners set it to 'test'.
+    mode: 'production',
     registerType: 'autoUpdate',
     injectRegister: false,
     manifest: false,
