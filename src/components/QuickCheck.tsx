@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useRef } from 'react';
 import type { ReactElement } from 'react';
 import type { QuickMode, QuickState } from '../lib/calculators/quick-check';
 import { QUICK_DEFAULTS } from '../lib/calculators/quick-check';
@@ -15,6 +15,7 @@ import QuickFlagResult from './QuickFlagResult';
 import ShareLink from './ShareLink';
 import UnitToggle from './UnitToggle';
 import VerdictBanner from './VerdictBanner';
+import VerdictDock from './VerdictDock';
 import WarningList from './WarningList';
 
 const MODES = [
@@ -59,6 +60,7 @@ export default function QuickCheck(): ReactElement {
   const system = useUnitSystem();
   const { state, update, query } = useCalcState<QuickState>(QUICK_DEFAULTS);
   const answer = useMemo(() => quickAnswer(state), [state]);
+  const resultRef = useRef<HTMLElement>(null);
   return (
     <div className="space-y-5">
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -79,7 +81,7 @@ export default function QuickCheck(): ReactElement {
           </p>
         ) : (
           <>
-            <section aria-label="Result" className="min-w-0 space-y-3">
+            <section id="quick-result" ref={resultRef} aria-label="Result" className="min-w-0 scroll-mt-4 space-y-3">
               <VerdictBanner verdict={answer.verdict} />
               <FigureList figures={answer.figures} system={system} />
               <Limits a={answer} system={system} />
@@ -90,6 +92,17 @@ export default function QuickCheck(): ReactElement {
           </>
         )}
       </div>
+      {!('error' in answer) && (
+        <VerdictDock
+          tone={answer.verdict.tone}
+          word={answer.verdict.word}
+          detail={answer.figures
+            .slice(0, 2)
+            .map((f) => (Number.isFinite(f.si) ? formatQuantity(f.kind, f.si, system) : 'never'))
+            .join(' · ')}
+          target={resultRef}
+        />
+      )}
       <div className="flex flex-wrap items-center justify-between gap-3">
         <a href={`${FULL_TOOL[state.mode].href}`} className="flex min-h-11 items-center font-semibold text-teal-deep underline">
           {FULL_TOOL[state.mode].label}
