@@ -53,6 +53,7 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/guides', access: 'anyone' },
   { pattern: '/guides/**', access: 'anyone' },
   { pattern: '/pricing', access: 'anyone' },
+  { pattern: '/developers/api', access: 'anyone' },
   { pattern: '/api/health', access: 'anyone' },
   // Public calculation API: cookie-free and CORS-open, so no Origin check (API v1 answers 415 etc.).
   { pattern: '/api/v1/**', access: 'anyone', originExempt: true },
