@@ -19,3 +19,4 @@ export * from './catalog';
 export * from './units';
 export * from './vessels';
 export * from './drain';
+export * from './drain-sizing';
