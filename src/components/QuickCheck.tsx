@@ -12,6 +12,7 @@ import ChoiceButtons from './ChoiceButtons';
 import FigureList from './FigureList';
 import QuickInputs from './QuickInputs';
 import QuickFlagResult from './QuickFlagResult';
+import QuickSaveToJob from './QuickSaveToJob';
 import ShareLink from './ShareLink';
 import UnitToggle from './UnitToggle';
 import VerdictBanner from './VerdictBanner';
@@ -87,6 +88,7 @@ export default function QuickCheck(): ReactElement {
               <Limits a={answer} system={system} />
               <WarningList warnings={answer.warnings} />
               <QuickFlagResult state={state} answer={answer} system={system} />
+              <QuickSaveToJob state={state} answer={answer} system={system} query={query} />
             </section>
             <CautionNotes ids={answer.cautions} />
           </>
