@@ -8,7 +8,6 @@ import { flagMessages, flagSnapshots, flags } from './schema';
 // signed-out visitor, so the support desk has work to show. Fixed ids keep the seed idempotent.
 // Ages count back from seeding time, so a fresh demo desk shows a day-old and a fresh flag.
 
-
 const tankWall: SiphonRequest = {
   fluid: { water_temperature_c: 18 },
   site: { altitude_m: 240 },
@@ -21,7 +20,13 @@ const tankWall: SiphonRequest = {
 
 const gardenPond: DrainRequest = {
   fluid: { water_temperature_c: 14 },
-  vessel: { shape: 'sloped_pond', bottom_length_m: 3, bottom_width_m: 2, side_slope_h_per_v: 1.5, depth_m: 0.9 },
+  vessel: {
+    shape: 'sloped_pond',
+    bottom_length_m: 3,
+    bottom_width_m: 2,
+    side_slope_h_per_v: 1.5,
+    depth_m: 0.9,
+  },
   initial_depth_m: 0.8,
   final_depth_m: 0.05,
   outlet: { type: 'orifice', diameter_m: 0.05 },
@@ -41,7 +46,8 @@ function demoFlags(): DemoFlag[] {
       flag: {
         tool: 'siphon',
         reason: 'site_differs',
-        message: 'Ran for a couple of minutes, then gurgled and stopped. Crest was the tank lip, about 1.2 m above the water.',
+        message:
+          'Ran for a couple of minutes, then gurgled and stopped. Crest was the tank lip, about 1.2 m above the water.',
         reporterUserId: 'usr_demo_crew1',
         reporterEmail: 'tomas@heronsgate.example',
         organisationId: 'org_demo_heronsgate',
@@ -55,7 +61,8 @@ function demoFlags(): DemoFlag[] {
       flag: {
         tool: 'drain',
         reason: 'need_help',
-        message: 'Not sure what to type for the side slope of a pond with stepped planting shelves.',
+        message:
+          'Not sure what to type for the side slope of a pond with stepped planting shelves.',
         reporterEmail: 'marta@cobblepath.example',
         status: 'in_hand',
         assigneeUserId: 'usr_demo_support',
@@ -72,11 +79,23 @@ export function seedFlags(db: Db): void {
     for (const d of demoFlags()) {
       const at = new Date(Date.now() - d.hoursAgo * 3_600_000);
       tx.insert(flags)
-        .values({ ...d.flag, id: d.id, viewTokenHash: hashToken(newViewToken()), createdAt: at, updatedAt: at })
+        .values({
+          ...d.flag,
+          id: d.id,
+          viewTokenHash: hashToken(newViewToken()),
+          createdAt: at,
+          updatedAt: at,
+        })
         .onConflictDoNothing()
         .run();
       tx.insert(flagSnapshots)
-        .values({ flagId: d.id, ...d.snapshot, engineVersion: ENGINE_VERSION, unitSystem: 'metric', createdAt: at })
+        .values({
+          flagId: d.id,
+          ...d.snapshot,
+          engineVersion: ENGINE_VERSION,
+          unitSystem: 'metric',
+          createdAt: at,
+        })
         .onConflictDoNothing()
         .run();
     }

@@ -7,7 +7,13 @@ import { users } from './users';
 export const FLAG_REASONS = ['looks_wrong', 'site_differs', 'need_help'] as const;
 
 /** Where a flag stands, in the order support usually moves it along. */
-export const FLAG_STATUSES = ['new', 'in_hand', 'waiting_on_reporter', 'answered', 'closed'] as const;
+export const FLAG_STATUSES = [
+  'new',
+  'in_hand',
+  'waiting_on_reporter',
+  'answered',
+  'closed',
+] as const;
 
 /** The engine tools a result can come from. */
 export const FLAG_TOOLS = ['line', 'siphon', 'drain'] as const;
@@ -90,13 +96,19 @@ export const auditEntries = sqliteTable(
     detail: text('detail', { mode: 'json' }),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
   },
-  (t) => [index('audit_entries_created_idx').on(t.createdAt), index('audit_entries_flag_idx').on(t.flagId)],
+  (t) => [
+    index('audit_entries_created_idx').on(t.createdAt),
+    index('audit_entries_flag_idx').on(t.flagId),
+  ],
 );
 
 export const flagsRelations = relations(flags, ({ one, many }) => ({
   snapshot: one(flagSnapshots, { fields: [flags.id], references: [flagSnapshots.flagId] }),
   messages: many(flagMessages),
-  organisation: one(organisations, { fields: [flags.organisationId], references: [organisations.id] }),
+  organisation: one(organisations, {
+    fields: [flags.organisationId],
+    references: [organisations.id],
+  }),
 }));
 
 export const flagSnapshotsRelations = relations(flagSnapshots, ({ one }) => ({

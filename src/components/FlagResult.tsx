@@ -16,7 +16,11 @@ export interface FlagResultProps {
   page?: string;
 }
 
-type Phase = { step: 'closed' } | { step: 'open'; error?: string } | { step: 'sending' } | { step: 'sent'; email: string };
+type Phase =
+  | { step: 'closed' }
+  | { step: 'open'; error?: string }
+  | { step: 'sending' }
+  | { step: 'sent'; email: string };
 
 const REASONS = Object.entries(REASON_LABELS) as [FlagReason, string][];
 
@@ -25,14 +29,25 @@ function engineVersionOf(results: object): string {
   return typeof v === 'string' && v ? v : ENGINE_VERSION;
 }
 
-async function sendFlag(p: FlagResultProps, reason: FlagReason, message: string, email: string): Promise<string | null> {
+async function sendFlag(
+  p: FlagResultProps,
+  reason: FlagReason,
+  message: string,
+  email: string,
+): Promise<string | null> {
   const page = p.page ?? `${window.location.pathname}${window.location.search}`;
   const body = {
     tool: p.tool,
     reason,
     message,
     ...(email ? { email } : {}),
-    snapshot: { inputs: p.inputs, results: p.results, engineVersion: engineVersionOf(p.results), unitSystem: p.unitSystem, page },
+    snapshot: {
+      inputs: p.inputs,
+      results: p.results,
+      engineVersion: engineVersionOf(p.results),
+      unitSystem: p.unitSystem,
+      page,
+    },
   };
   try {
     const res = await fetch('/api/flags', {
@@ -41,10 +56,17 @@ async function sendFlag(p: FlagResultProps, reason: FlagReason, message: string,
       body: JSON.stringify(body),
     });
     if (res.ok) return null;
-    const err = (await res.json().catch(() => ({}))) as { message?: string; issues?: { path: string; message: string }[] };
+    const err = (await res.json().catch(() => ({}))) as {
+      message?: string;
+      issues?: { path: string; message: string }[];
+    };
     const emailIssue = err.issues?.find((i) => i.path === 'email');
     if (emailIssue) return 'Leave an e-mail address so we can answer you.';
-    return err.message ?? err.issues?.map((i) => `${i.path}: ${i.message}`).join('; ') ?? 'Sending failed; try again.';
+    return (
+      err.message ??
+      err.issues?.map((i) => `${i.path}: ${i.message}`).join('; ') ??
+      'Sending failed; try again.'
+    );
   } catch {
     return 'No connection; try again when you have signal.';
   }
@@ -71,9 +93,13 @@ export default function FlagResult(p: FlagResultProps): ReactElement {
   }
   if (phase.step === 'sent') {
     return (
-      <p role="status" className="rounded-lg border-l-8 border-teal bg-teal-wash p-3" data-testid="flag-sent">
-        Thanks — our support desk has it. We will write to {phase.email || 'your account address'} with a link to
-        follow the answer.
+      <p
+        role="status"
+        className="rounded-lg border-l-8 border-teal bg-teal-wash p-3"
+        data-testid="flag-sent"
+      >
+        Thanks — our support desk has it. We will write to {phase.email || 'your account address'}{' '}
+        with a link to follow the answer.
       </p>
     );
   }
@@ -86,12 +112,23 @@ export default function FlagResult(p: FlagResultProps): ReactElement {
   };
 
   return (
-    <form onSubmit={submit} aria-label="Flag this result" className="space-y-3 rounded-lg border border-rule bg-white p-3">
+    <form
+      onSubmit={submit}
+      aria-label="Flag this result"
+      className="space-y-3 rounded-lg border border-rule bg-white p-3"
+    >
       <fieldset>
         <legend className="font-extrabold">What is the matter?</legend>
         {REASONS.map(([value, label]) => (
           <label key={value} className="flex min-h-11 items-center gap-2">
-            <input type="radio" name={`${id}-reason`} value={value} checked={reason === value} onChange={() => setReason(value)} className="size-5" />
+            <input
+              type="radio"
+              name={`${id}-reason`}
+              value={value}
+              checked={reason === value}
+              onChange={() => setReason(value)}
+              className="size-5"
+            />
             {label}
           </label>
         ))}
@@ -120,17 +157,27 @@ export default function FlagResult(p: FlagResultProps): ReactElement {
         />
         <span className="text-step--1 text-ink-faint">Signed in? You can leave this empty.</span>
       </label>
-      <p className="text-step--1 text-ink-faint">We keep a copy of these inputs and results so support can check them.</p>
+      <p className="text-step--1 text-ink-faint">
+        We keep a copy of these inputs and results so support can check them.
+      </p>
       {phase.step === 'open' && phase.error && (
         <p role="alert" className="font-semibold text-verdict-fails">
           {phase.error}
         </p>
       )}
       <div className="flex flex-wrap gap-2">
-        <button type="submit" disabled={phase.step === 'sending'} className="min-h-11 rounded-lg bg-teal px-4 font-semibold text-white hover:bg-teal-deep">
+        <button
+          type="submit"
+          disabled={phase.step === 'sending'}
+          className="min-h-11 rounded-lg bg-teal px-4 font-semibold text-white hover:bg-teal-deep"
+        >
           {phase.step === 'sending' ? 'Sending…' : 'Send to support'}
         </button>
-        <button type="button" onClick={() => setPhase({ step: 'closed' })} className="min-h-11 rounded-lg px-3 font-semibold text-ink-soft underline">
+        <button
+          type="button"
+          onClick={() => setPhase({ step: 'closed' })}
+          className="min-h-11 rounded-lg px-3 font-semibold text-ink-soft underline"
+        >
           Cancel
         </button>
       </div>

@@ -5,15 +5,23 @@ import type { Rerun } from '../lib/flags/rerun';
 
 function show(v: Scalar | undefined): string {
   if (v === undefined) return '—';
-  if (typeof v === 'number') return Number.isInteger(v) ? String(v) : String(Number(v.toPrecision(6)));
+  if (typeof v === 'number')
+    return Number.isInteger(v) ? String(v) : String(Number(v.toPrecision(6)));
   return String(v);
 }
 
 function pct(d: FieldDiff): string {
-  return d.relative === null ? '' : `${d.relative > 0 ? '+' : ''}${(d.relative * 100).toPrecision(3)} %`;
+  return d.relative === null
+    ? ''
+    : `${d.relative > 0 ? '+' : ''}${(d.relative * 100).toPrecision(3)} %`;
 }
 
-const CHANGE_TEXT: Record<FieldDiff['change'], string> = { same: 'same', changed: 'changed', added: 'new field', removed: 'gone' };
+const CHANGE_TEXT: Record<FieldDiff['change'], string> = {
+  same: 'same',
+  changed: 'changed',
+  added: 'new field',
+  removed: 'gone',
+};
 
 function DiffTable({ diffs, showSame }: { diffs: FieldDiff[]; showSame: boolean }): ReactElement {
   const rows = showSame ? diffs : diffs.filter((d) => d.change !== 'same');
@@ -30,7 +38,15 @@ function DiffTable({ diffs, showSame }: { diffs: FieldDiff[]; showSame: boolean 
         </thead>
         <tbody>
           {rows.map((d) => (
-            <tr key={d.path} data-change={d.change} className={d.change === 'same' ? 'border-t border-rule' : 'border-t border-rule bg-verdict-edge-wash font-semibold'}>
+            <tr
+              key={d.path}
+              data-change={d.change}
+              className={
+                d.change === 'same'
+                  ? 'border-t border-rule'
+                  : 'border-t border-rule bg-verdict-edge-wash font-semibold'
+              }
+            >
               <td className="p-2 font-mono break-all">{d.path}</td>
               <td className="p-2">{show(d.before)}</td>
               <td className="p-2">{show(d.after)}</td>
@@ -68,23 +84,44 @@ export default function RerunDiff({ flagId }: { flagId: string }): ReactElement 
 
   return (
     <div className="space-y-3">
-      <button type="button" onClick={run} disabled={busy} className="min-h-11 rounded-lg bg-teal px-4 font-semibold text-white hover:bg-teal-deep">
+      <button
+        type="button"
+        onClick={run}
+        disabled={busy}
+        className="min-h-11 rounded-lg bg-teal px-4 font-semibold text-white hover:bg-teal-deep"
+      >
         {busy ? 'Solving…' : "Re-run on today's engine"}
       </button>
-      {error && <p role="alert" className="font-semibold text-verdict-fails">{error}</p>}
+      {error && (
+        <p role="alert" className="font-semibold text-verdict-fails">
+          {error}
+        </p>
+      )}
       {rerun && !rerun.ok && (
-        <p role="status" className="rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-3" data-testid="rerun-refused">
-          Engine {rerun.engineVersion} refuses these inputs — {rerun.error.path}: {rerun.error.message}
+        <p
+          role="status"
+          className="rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-3"
+          data-testid="rerun-refused"
+        >
+          Engine {rerun.engineVersion} refuses these inputs — {rerun.error.path}:{' '}
+          {rerun.error.message}
         </p>
       )}
       {rerun?.ok && (
         <>
           <p role="status" data-testid="rerun-summary" className="font-semibold">
             Engine {rerun.engineVersion}:{' '}
-            {rerun.changed === 0 ? 'every field matches the frozen result.' : `${rerun.changed} field${rerun.changed === 1 ? '' : 's'} differ from the frozen result.`}
+            {rerun.changed === 0
+              ? 'every field matches the frozen result.'
+              : `${rerun.changed} field${rerun.changed === 1 ? '' : 's'} differ from the frozen result.`}
           </p>
           <label className="flex min-h-11 items-center gap-2">
-            <input type="checkbox" checked={showSame} onChange={(e) => setShowSame(e.target.checked)} className="size-5" />
+            <input
+              type="checkbox"
+              checked={showSame}
+              onChange={(e) => setShowSame(e.target.checked)}
+              className="size-5"
+            />
             Show unchanged fields too
           </label>
           {(showSame || rerun.changed > 0) && <DiffTable diffs={rerun.diffs} showSame={showSame} />}

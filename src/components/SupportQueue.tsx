@@ -10,7 +10,11 @@ interface Query {
   page: number;
 }
 
-const STATUS_CHOICES: [string, string][] = [['open', 'All open'], ...Object.entries(STATUS_LABELS), ['all', 'Everything']];
+const STATUS_CHOICES: [string, string][] = [
+  ['open', 'All open'],
+  ...Object.entries(STATUS_LABELS),
+  ['all', 'Everything'],
+];
 const TOOL_CHOICES: [string, string][] = [['all', 'All tools'], ...Object.entries(TOOL_LABELS)];
 const PER_PAGE = 20;
 
@@ -22,11 +26,20 @@ export function ageText(iso: string, now = Date.now()): string {
   return `${Math.round(minutes / 1440)} d`;
 }
 
-function Select(p: { label: string; value: string; choices: [string, string][]; onChange: (v: string) => void }): ReactElement {
+function Select(p: {
+  label: string;
+  value: string;
+  choices: [string, string][];
+  onChange: (v: string) => void;
+}): ReactElement {
   return (
     <label className="flex flex-col text-step--1 font-semibold">
       {p.label}
-      <select value={p.value} onChange={(e) => p.onChange(e.target.value)} className="min-h-11 rounded border border-rule bg-white px-2 text-step-0">
+      <select
+        value={p.value}
+        onChange={(e) => p.onChange(e.target.value)}
+        className="min-h-11 rounded border border-rule bg-white px-2 text-step-0"
+      >
         {p.choices.map(([v, l]) => (
           <option key={v} value={v}>
             {l}
@@ -66,11 +79,22 @@ export default function SupportQueue(): ReactElement {
   const [error, setError] = useState<string | null>(null);
 
   useEffect(() => {
-    const params = new URLSearchParams({ status: q.status, tool: q.tool, sort: q.sort, page: String(q.page), perPage: String(PER_PAGE) });
+    const params = new URLSearchParams({
+      status: q.status,
+      tool: q.tool,
+      sort: q.sort,
+      page: String(q.page),
+      perPage: String(PER_PAGE),
+    });
     let live = true;
     fetch(`/api/support/flags?${params}`, { headers: { Accept: 'application/json' } })
       .then(async (res) => {
-        if (!res.ok) throw new Error(res.status === 403 ? 'This account cannot see the support queue.' : `The queue did not load (${res.status}).`);
+        if (!res.ok)
+          throw new Error(
+            res.status === 403
+              ? 'This account cannot see the support queue.'
+              : `The queue did not load (${res.status}).`,
+          );
         return (await res.json()) as QueuePage;
       })
       .then((page) => live && (setData(page), setError(null)))
@@ -85,9 +109,27 @@ export default function SupportQueue(): ReactElement {
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-3">
-        <Select label="Status" value={q.status} choices={STATUS_CHOICES} onChange={(status) => set({ status })} />
-        <Select label="Tool" value={q.tool} choices={TOOL_CHOICES} onChange={(tool) => set({ tool })} />
-        <Select label="Order" value={q.sort} choices={[['oldest', 'Oldest first'], ['newest', 'Newest first']]} onChange={(sort) => set({ sort: sort as Query['sort'] })} />
+        <Select
+          label="Status"
+          value={q.status}
+          choices={STATUS_CHOICES}
+          onChange={(status) => set({ status })}
+        />
+        <Select
+          label="Tool"
+          value={q.tool}
+          choices={TOOL_CHOICES}
+          onChange={(tool) => set({ tool })}
+        />
+        <Select
+          label="Order"
+          value={q.sort}
+          choices={[
+            ['oldest', 'Oldest first'],
+            ['newest', 'Newest first'],
+          ]}
+          onChange={(sort) => set({ sort: sort as Query['sort'] })}
+        />
       </div>
       {error && (
         <p role="alert" className="font-semibold text-verdict-fails">
@@ -107,7 +149,9 @@ export default function SupportQueue(): ReactElement {
             </tr>
           </thead>
           <tbody>
-            {data?.flags.map((f) => <Row key={f.id} f={f} />)}
+            {data?.flags.map((f) => (
+              <Row key={f.id} f={f} />
+            ))}
             {data && data.flags.length === 0 && (
               <tr>
                 <td colSpan={6} className="p-4 text-ink-soft">
@@ -119,13 +163,23 @@ export default function SupportQueue(): ReactElement {
         </table>
       </div>
       <nav aria-label="Queue pages" className="flex items-center gap-3">
-        <button type="button" disabled={q.page <= 1} onClick={() => setQ({ ...q, page: q.page - 1 })} className="min-h-11 rounded border border-rule px-3 disabled:opacity-40">
+        <button
+          type="button"
+          disabled={q.page <= 1}
+          onClick={() => setQ({ ...q, page: q.page - 1 })}
+          className="min-h-11 rounded border border-rule px-3 disabled:opacity-40"
+        >
           Previous
         </button>
         <span>
           Page {q.page} of {pages} · {data?.total ?? 0} flags
         </span>
-        <button type="button" disabled={q.page >= pages} onClick={() => setQ({ ...q, page: q.page + 1 })} className="min-h-11 rounded border border-rule px-3 disabled:opacity-40">
+        <button
+          type="button"
+          disabled={q.page >= pages}
+          onClick={() => setQ({ ...q, page: q.page + 1 })}
+          className="min-h-11 rounded border border-rule px-3 disabled:opacity-40"
+        >
           Next
         </button>
       </nav>

@@ -23,7 +23,11 @@ const flagBody = {
   reason: 'need_help',
   email: 'visitor@example.org',
   snapshot: {
-    inputs: { line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' }, source_level_m: 1, outlet_elevation_m: 0 },
+    inputs: {
+      line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' },
+      source_level_m: 1,
+      outlet_elevation_m: 0,
+    },
     results: { flow_m3_s: 0.001 },
     engineVersion: '1.0.0',
     unitSystem: 'metric',
@@ -61,12 +65,36 @@ const CASES: Case[] = [
   { method: 'GET', path: '/api/support/flags', want: api(200) },
   { method: 'GET', path: `/api/support/flags/${FLAG}`, want: api(200) },
   { method: 'GET', path: `/api/support/flags/${FLAG}/rerun`, want: api(200) },
-  { method: 'PATCH', path: `/api/support/flags/${FLAG}`, body: { status: 'in_hand' }, want: api(200) },
-  { method: 'POST', path: `/api/support/flags/${FLAG}/notes`, body: { body: 'Checked the crest.' }, want: api(201) },
-  { method: 'POST', path: `/api/support/flags/${FLAG}/replies`, body: { body: 'Check the hose joints for air leaks.' }, want: api(201) },
+  {
+    method: 'PATCH',
+    path: `/api/support/flags/${FLAG}`,
+    body: { status: 'in_hand' },
+    want: api(200),
+  },
+  {
+    method: 'POST',
+    path: `/api/support/flags/${FLAG}/notes`,
+    body: { body: 'Checked the crest.' },
+    want: api(201),
+  },
+  {
+    method: 'POST',
+    path: `/api/support/flags/${FLAG}/replies`,
+    body: { body: 'Check the hose joints for air leaks.' },
+    want: api(201),
+  },
   { method: 'GET', path: '/api/support/audit', want: api(200, true) },
-  { method: 'POST', path: '/api/flags', body: flagBody, want: { anonymous: 201, member: 201, owner: 201, support: 201, admin: 201 } },
-  { method: 'GET', path: '/app/flags', want: { anonymous: 302, member: 200, owner: 200, support: 200, admin: 200 } },
+  {
+    method: 'POST',
+    path: '/api/flags',
+    body: flagBody,
+    want: { anonymous: 201, member: 201, owner: 201, support: 201, admin: 201 },
+  },
+  {
+    method: 'GET',
+    path: '/app/flags',
+    want: { anonymous: 302, member: 200, owner: 200, support: 200, admin: 200 },
+  },
 ];
 
 let app: StartedApp;
@@ -98,7 +126,8 @@ beforeAll(async () => {
   app = await startApp(PORT, { FLAGS_PER_WINDOW: '1000' });
   db = appDb(app.dataDir);
   prepareDesk(db);
-  for (const role of ROLES) if (role !== 'anonymous') cookie[role] = sessionCookie(db, USER_OF[role]);
+  for (const role of ROLES)
+    if (role !== 'anonymous') cookie[role] = sessionCookie(db, USER_OF[role]);
 });
 
 afterAll(async () => {
@@ -118,7 +147,13 @@ describe('flag and support routes', () => {
   }
 
   test('does keep support staff out of jobs, team and billing', async () => {
-    for (const path of ['/api/jobs', '/app/jobs', '/app/billing', '/api/billing/portal', '/api/team/invitations']) {
+    for (const path of [
+      '/api/jobs',
+      '/app/jobs',
+      '/app/billing',
+      '/api/billing/portal',
+      '/api/team/invitations',
+    ]) {
       // 403 from the route table; 404 where that page has not been built yet. Never 200.
       const res = await call('support', 'GET', path);
       expect([403, 404], path).toContain(res.status);
@@ -128,7 +163,9 @@ describe('flag and support routes', () => {
   test('does answer an unknown flag id with 404, not an error', async () => {
     expect((await call('support', 'GET', '/api/support/flags/flg_nope')).status).toBe(404);
     expect((await call('support', 'GET', '/api/support/flags/flg_nope/rerun')).status).toBe(404);
-    expect((await call('support', 'POST', '/api/support/flags/flg_nope/notes', { body: 'x' })).status).toBe(404);
+    expect(
+      (await call('support', 'POST', '/api/support/flags/flg_nope/notes', { body: 'x' })).status,
+    ).toBe(404);
     expect((await call('support', 'GET', '/support/flags/flg_nope')).status).toBe(404);
   });
 });
@@ -153,18 +190,28 @@ describe('the audit log', () => {
 
   test('does record status changes and assignments with from and to', async () => {
     const before = auditCount(USER_OF.support, 'flag.assign');
-    const res = await call('support', 'PATCH', `/api/support/flags/${FLAG}`, { status: 'waiting_on_reporter', assigneeUserId: USER_OF.support });
+    const res = await call('support', 'PATCH', `/api/support/flags/${FLAG}`, {
+      status: 'waiting_on_reporter',
+      assigneeUserId: USER_OF.support,
+    });
     expect(res.status).toBe(200);
     expect(auditCount(USER_OF.support, 'flag.assign')).toBe(before + 1);
-    const log = (await (await call('admin', 'GET', `/api/support/audit?flagId=${FLAG}`)).json()) as {
+    const log = (await (
+      await call('admin', 'GET', `/api/support/audit?flagId=${FLAG}`)
+    ).json()) as {
       entries: { action: string; actorEmail: string; detail: { from?: string; to?: string } }[];
     };
     const status = log.entries.find((e) => e.action === 'flag.status');
-    expect(status).toMatchObject({ actorEmail: 'desk@drainwright.example', detail: { to: 'waiting_on_reporter' } });
+    expect(status).toMatchObject({
+      actorEmail: 'desk@drainwright.example',
+      detail: { to: 'waiting_on_reporter' },
+    });
   });
 
   test('does refuse assigning a flag to someone who is not staff', async () => {
-    const res = await call('support', 'PATCH', `/api/support/flags/${FLAG}`, { assigneeUserId: USER_OF.member });
+    const res = await call('support', 'PATCH', `/api/support/flags/${FLAG}`, {
+      assigneeUserId: USER_OF.member,
+    });
     expect(res.status).toBe(400);
   });
 });

@@ -5,9 +5,18 @@ import { rerunSnapshot } from '../../src/lib/flags/rerun';
 // Expected values here are worked by hand from the inputs written in each test.
 describe('diffResults', () => {
   test('does mark a moved number with its relative change', () => {
-    const d = diffResults({ flow_m3_s: 0.002, status: 'runs' }, { flow_m3_s: 0.0025, status: 'runs' });
+    const d = diffResults(
+      { flow_m3_s: 0.002, status: 'runs' },
+      { flow_m3_s: 0.0025, status: 'runs' },
+    );
     expect(d).toEqual([
-      { path: 'flow_m3_s', before: 0.002, after: 0.0025, change: 'changed', relative: expect.closeTo(0.25, 12) },
+      {
+        path: 'flow_m3_s',
+        before: 0.002,
+        after: 0.0025,
+        change: 'changed',
+        relative: expect.closeTo(0.25, 12),
+      },
       { path: 'status', before: 'runs', after: 'runs', change: 'same', relative: null },
     ]);
   });
@@ -18,7 +27,10 @@ describe('diffResults', () => {
   });
 
   test('does report fields only one side has', () => {
-    const d = diffResults({ a: 1, losses_m: { exit: 0.1 } }, { losses_m: { exit: 0.1, entrance: 0.05 } });
+    const d = diffResults(
+      { a: 1, losses_m: { exit: 0.1 } },
+      { losses_m: { exit: 0.1, entrance: 0.05 } },
+    );
     expect(d.map((r) => [r.path, r.change])).toEqual([
       ['a', 'removed'],
       ['losses_m.exit', 'same'],
@@ -27,13 +39,28 @@ describe('diffResults', () => {
   });
 
   test('does compare warnings by their codes, whatever their order or wording', () => {
-    const before = { warnings: [{ code: 'b', message: 'x' }, { code: 'a', message: 'y' }] };
-    const after = { warnings: [{ code: 'a', message: 'reworded' }, { code: 'b', message: 'x' }] };
-    expect(diffResults(before, after)).toEqual([{ path: 'warnings', before: 'a, b', after: 'a, b', change: 'same', relative: null }]);
+    const before = {
+      warnings: [
+        { code: 'b', message: 'x' },
+        { code: 'a', message: 'y' },
+      ],
+    };
+    const after = {
+      warnings: [
+        { code: 'a', message: 'reworded' },
+        { code: 'b', message: 'x' },
+      ],
+    };
+    expect(diffResults(before, after)).toEqual([
+      { path: 'warnings', before: 'a, b', after: 'a, b', change: 'same', relative: null },
+    ]);
   });
 
   test('does summarise a long curve by its length and last point', () => {
-    const curve = Array.from({ length: 20 }, (_, i) => ({ time_s: i * 10, depth_m: (20 - i) / 20 }));
+    const curve = Array.from({ length: 20 }, (_, i) => ({
+      time_s: i * 10,
+      depth_m: (20 - i) / 20,
+    }));
     const flat = flatten({ curve });
     expect([...flat]).toEqual([
       ['curve.length', 20],
@@ -65,7 +92,11 @@ describe('rerunSnapshot', () => {
   });
 
   test('does report refused inputs with the path the engine names', () => {
-    const bad = rerunSnapshot('line', { ...inputs, line: { ...inputs.line, material: 'no-such-material' } }, {});
+    const bad = rerunSnapshot(
+      'line',
+      { ...inputs, line: { ...inputs.line, material: 'no-such-material' } },
+      {},
+    );
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.error.path).toBe('line.material');
   });

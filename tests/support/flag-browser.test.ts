@@ -11,7 +11,8 @@ import { appDb, prepareDesk, sessionCookie, threadLink, waitForEmail } from './h
 const PORT = 46610;
 const FAKE = `http://127.0.0.1:${PORT + 10_000}`;
 const REPORTER = 'pond.crew@example.org';
-const REPLY = 'The crest is close to its limit at that height; lower the hose over the wall by 30 cm.';
+const REPLY =
+  'The crest is close to its limit at that height; lower the hose over the wall by 30 cm.';
 
 let app: StartedApp;
 let db: Db;
@@ -41,8 +42,14 @@ describe('flagging from the quick check', () => {
     await page.getByLabel('Your e-mail, so we can answer').fill(REPORTER);
     await page.getByRole('button', { name: 'Send to support' }).click();
     await page.getByTestId('flag-sent').waitFor();
-    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
-    const received = await waitForEmail(FAKE, REPORTER, (e) => e.subject === 'We have your flagged result');
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(
+      360,
+    );
+    const received = await waitForEmail(
+      FAKE,
+      REPORTER,
+      (e) => e.subject === 'We have your flagged result',
+    );
 
     const desk = await phoneContext(browser, app.url);
     const [name, value] = sessionCookie(db, 'usr_demo_support').split('=');
@@ -54,12 +61,18 @@ describe('flagging from the quick check', () => {
     await deskPage.getByText('Hose ran slower than this says.').waitFor();
     await deskPage.getByRole('button', { name: "Re-run on today's engine" }).click();
     await deskPage.getByTestId('rerun-summary').waitFor();
-    expect(await deskPage.getByTestId('rerun-summary').textContent()).toContain('every field matches');
+    expect(await deskPage.getByTestId('rerun-summary').textContent()).toContain(
+      'every field matches',
+    );
     await deskPage.getByLabel('Reply to the reporter (sent by e-mail)').fill(REPLY);
     await deskPage.getByRole('button', { name: 'Send reply' }).click();
     await deskPage.getByTestId('thread').getByText(REPLY).waitFor();
 
-    const mail = await waitForEmail(FAKE, REPORTER, (e) => e.subject === 'Reply about your flagged result');
+    const mail = await waitForEmail(
+      FAKE,
+      REPORTER,
+      (e) => e.subject === 'Reply about your flagged result',
+    );
     expect(mail.text).toContain(REPLY);
 
     await page.goto(threadLink(received));

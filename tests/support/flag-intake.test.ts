@@ -12,7 +12,11 @@ const PORT = 46602;
 const FAKE = `http://127.0.0.1:${PORT + 10_000}`;
 
 const snapshot = {
-  inputs: { line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' }, source_level_m: 1, outlet_elevation_m: 0 },
+  inputs: {
+    line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' },
+    source_level_m: 1,
+    outlet_elevation_m: 0,
+  },
   results: { flow_m3_s: 0.001 },
   engineVersion: '1.0.0',
   unitSystem: 'metric',
@@ -34,7 +38,10 @@ function post(path: string, body: unknown, cookie?: string): Promise<Response> {
 }
 
 async function page(path: string, cookie?: string): Promise<{ status: number; html: string }> {
-  const res = await fetch(`${app.url}${path}`, { headers: cookie ? { Cookie: cookie } : {}, redirect: 'manual' });
+  const res = await fetch(`${app.url}${path}`, {
+    headers: cookie ? { Cookie: cookie } : {},
+    redirect: 'manual',
+  });
   return { status: res.status, html: await res.text() };
 }
 
@@ -66,9 +73,25 @@ describe('POST /api/flags', () => {
       { tool: 'pump', reason: 'looks_wrong', email: 'a@b.example', snapshot },
       { tool: 'line', reason: 'angry', email: 'a@b.example', snapshot },
       { tool: 'line', reason: 'looks_wrong', email: 'not-an-address', snapshot },
-      { tool: 'line', reason: 'looks_wrong', email: 'a@b.example', snapshot: { ...snapshot, page: 'https://elsewhere.example/' } },
-      { tool: 'line', reason: 'looks_wrong', email: 'a@b.example', snapshot: { ...snapshot, inputs: [1, 2] } },
-      { tool: 'line', reason: 'looks_wrong', email: 'a@b.example', message: 'x'.repeat(4001), snapshot },
+      {
+        tool: 'line',
+        reason: 'looks_wrong',
+        email: 'a@b.example',
+        snapshot: { ...snapshot, page: 'https://elsewhere.example/' },
+      },
+      {
+        tool: 'line',
+        reason: 'looks_wrong',
+        email: 'a@b.example',
+        snapshot: { ...snapshot, inputs: [1, 2] },
+      },
+      {
+        tool: 'line',
+        reason: 'looks_wrong',
+        email: 'a@b.example',
+        message: 'x'.repeat(4001),
+        snapshot,
+      },
     ];
     for (const body of cases) {
       const res = await post('/api/flags', body);
@@ -78,11 +101,19 @@ describe('POST /api/flags', () => {
   });
 
   test('does use the account address when signed in and tie the flag to the organisation', async () => {
-    const res = await post('/api/flags', { tool: 'line', reason: 'site_differs', snapshot, email: 'ignored@example.org' }, tomas);
+    const res = await post(
+      '/api/flags',
+      { tool: 'line', reason: 'site_differs', snapshot, email: 'ignored@example.org' },
+      tomas,
+    );
     expect(res.status).toBe(201);
     const { id } = (await res.json()) as { id: string };
     const row = db.select().from(flags).where(eq(flags.id, id)).get();
-    expect(row).toMatchObject({ reporterUserId: 'usr_demo_crew1', reporterEmail: 'tomas@heronsgate.example', organisationId: 'org_demo_heronsgate' });
+    expect(row).toMatchObject({
+      reporterUserId: 'usr_demo_crew1',
+      reporterEmail: 'tomas@heronsgate.example',
+      organisationId: 'org_demo_heronsgate',
+    });
     expect((await page('/app/flags', tomas)).html).toContain(`data-flag="${id}"`);
     expect((await page('/app/flags', rosa)).html).not.toContain(`data-flag="${id}"`);
   });
@@ -90,15 +121,26 @@ describe('POST /api/flags', () => {
 
 describe('the reporter thread', () => {
   const reporter = 'shore.crew@example.org';
-  const reply = 'Your hose is long for that head; the friction loss is most of it. Try the 1 in size.';
+  const reply =
+    'Your hose is long for that head; the friction loss is most of it. Try the 1 in size.';
   const note = 'Internal: checked against the line tool, figures agree.';
 
   test('does e-mail the reporter a link, send replies through the e-mail fake, and hide notes', async () => {
-    const res = await post('/api/flags', { tool: 'line', reason: 'looks_wrong', email: reporter, message: 'Seems slow', snapshot });
+    const res = await post('/api/flags', {
+      tool: 'line',
+      reason: 'looks_wrong',
+      email: reporter,
+      message: 'Seems slow',
+      snapshot,
+    });
     expect(res.status).toBe(201);
     const { id, emailed } = (await res.json()) as { id: string; emailed: boolean };
     expect(emailed).toBe(true);
-    const first = await waitForEmail(FAKE, reporter, (e) => e.subject === 'We have your flagged result');
+    const first = await waitForEmail(
+      FAKE,
+      reporter,
+      (e) => e.subject === 'We have your flagged result',
+    );
     const link = new URL(threadLink(first));
     expect(link.pathname).toMatch(/^\/flags\/[\w-]{43}$/);
 
@@ -106,7 +148,11 @@ describe('the reporter thread', () => {
     const sent = await post(`/api/support/flags/${id}/replies`, { body: reply }, desk);
     expect(await sent.json()).toMatchObject({ emailStatus: 'sent', kind: 'reply' });
 
-    const mail = await waitForEmail(FAKE, reporter, (e) => e.subject === 'Reply about your flagged result');
+    const mail = await waitForEmail(
+      FAKE,
+      reporter,
+      (e) => e.subject === 'Reply about your flagged result',
+    );
     expect(mail.to).toEqual([reporter]);
     expect(mail.text).toContain(reply);
     expect(mail.text).not.toContain(note);

@@ -18,7 +18,13 @@ export const ADMIN_ID = 'usr_test_admin';
  */
 export function prepareDesk(db: Db): void {
   db.insert(users)
-    .values({ id: ADMIN_ID, email: 'ops@drainwright.example', name: 'Ops Admin', staffRole: 'admin', createdAt: new Date() })
+    .values({
+      id: ADMIN_ID,
+      email: 'ops@drainwright.example',
+      name: 'Ops Admin',
+      staffRole: 'admin',
+      createdAt: new Date(),
+    })
     .onConflictDoNothing()
     .run();
   seedFlags(db);

@@ -19,10 +19,20 @@ describe('POST /api/flags rate limit', () => {
       tool: 'siphon',
       reason: 'looks_wrong',
       email: 'busy@example.org',
-      snapshot: { inputs: {}, results: {}, engineVersion: '1.0.0', unitSystem: 'metric', page: '/siphon' },
+      snapshot: {
+        inputs: {},
+        results: {},
+        engineVersion: '1.0.0',
+        unitSystem: 'metric',
+        page: '/siphon',
+      },
     });
     const send = (): Promise<Response> =>
-      fetch(`${app.url}/api/flags`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body });
+      fetch(`${app.url}/api/flags`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json' },
+        body,
+      });
     const statuses: number[] = [];
     for (let i = 0; i < 4; i++) statuses.push((await send()).status);
     expect(statuses).toEqual([201, 201, 201, 429]);

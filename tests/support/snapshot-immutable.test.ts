@@ -16,7 +16,11 @@ const body = newFlagSchema.parse({
   message: 'Flow looks too high',
   email: 'crew@example.org',
   snapshot: {
-    inputs: { line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' }, source_level_m: 1, outlet_elevation_m: 0 },
+    inputs: {
+      line: { inner_diameter_m: 0.025, length_m: 10, material: 'garden-hose' },
+      source_level_m: 1,
+      outlet_elevation_m: 0,
+    },
     results: { flow_m3_s: 0.0012, engine_version: '1.0.0' },
     engineVersion: '1.0.0',
     unitSystem: 'us',
@@ -30,7 +34,11 @@ describe('flag snapshots', () => {
   let token: string;
   beforeAll(() => {
     db = freshDb().db;
-    ({ id: flagId, token } = createFlag(db, body, { userId: null, email: 'Crew@Example.org', organisationId: null }));
+    ({ id: flagId, token } = createFlag(db, body, {
+      userId: null,
+      email: 'Crew@Example.org',
+      organisationId: null,
+    }));
   });
   afterAll(() => db.$client.close());
 
@@ -43,14 +51,24 @@ describe('flag snapshots', () => {
   });
 
   test('does refuse an UPDATE of a snapshot, in SQL and through drizzle', () => {
-    expect(() => db.$client.prepare("UPDATE flag_snapshots SET results = '{}' WHERE flag_id = ?").run(flagId)).toThrow(/immutable/);
-    expect(() => db.update(flagSnapshots).set({ engineVersion: '9.9.9' }).where(eq(flagSnapshots.flagId, flagId)).run()).toThrow(/immutable/);
+    expect(() =>
+      db.$client.prepare("UPDATE flag_snapshots SET results = '{}' WHERE flag_id = ?").run(flagId),
+    ).toThrow(/immutable/);
+    expect(() =>
+      db
+        .update(flagSnapshots)
+        .set({ engineVersion: '9.9.9' })
+        .where(eq(flagSnapshots.flagId, flagId))
+        .run(),
+    ).toThrow(/immutable/);
     const s = db.select().from(flagSnapshots).where(eq(flagSnapshots.flagId, flagId)).get();
     expect(s?.engineVersion).toBe('1.0.0');
   });
 
   test('does refuse deleting a snapshot', () => {
-    expect(() => db.$client.prepare('DELETE FROM flag_snapshots WHERE flag_id = ?').run(flagId)).toThrow(/immutable/);
+    expect(() =>
+      db.$client.prepare('DELETE FROM flag_snapshots WHERE flag_id = ?').run(flagId),
+    ).toThrow(/immutable/);
     expect(db.select().from(flagSnapshots).all()).toHaveLength(1);
   });
 
@@ -72,7 +90,12 @@ describe('audit entries', () => {
   test('does refuse edits and deletes', () => {
     const { db } = freshDb();
     seedDemo(db);
-    recordAudit(db, { id: 'usr_demo_support', email: 'desk@drainwright.example', staffRole: 'support' }, 'queue.view', null);
+    recordAudit(
+      db,
+      { id: 'usr_demo_support', email: 'desk@drainwright.example', staffRole: 'support' },
+      'queue.view',
+      null,
+    );
     expect(() => db.update(auditEntries).set({ action: 'nothing' }).run()).toThrow(/append-only/);
     expect(() => db.delete(auditEntries).run()).toThrow(/append-only/);
     expect(db.select().from(auditEntries).all()).toHaveLength(1);

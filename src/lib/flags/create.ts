@@ -17,7 +17,12 @@ export interface CreatedFlag {
 }
 
 /** Store a flag and its frozen snapshot in one transaction. */
-export function createFlag(db: Db, input: NewFlag, reporter: Reporter, now = new Date()): CreatedFlag {
+export function createFlag(
+  db: Db,
+  input: NewFlag,
+  reporter: Reporter,
+  now = new Date(),
+): CreatedFlag {
   const id = newId('flg');
   const token = newViewToken();
   db.transaction((tx) => {

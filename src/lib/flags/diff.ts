@@ -21,14 +21,27 @@ export const SAME_RELATIVE = 1e-9;
 const LONG_ARRAY = 8;
 
 function isCodeList(v: unknown[]): v is { code: string }[] {
-  return v.every((x) => typeof x === 'object' && x !== null && typeof (x as { code?: unknown }).code === 'string');
+  return v.every(
+    (x) =>
+      typeof x === 'object' && x !== null && typeof (x as { code?: unknown }).code === 'string',
+  );
 }
 
 /** Flatten a JSON value to path → scalar. */
-export function flatten(value: unknown, prefix = '', out = new Map<string, Scalar>()): Map<string, Scalar> {
+export function flatten(
+  value: unknown,
+  prefix = '',
+  out = new Map<string, Scalar>(),
+): Map<string, Scalar> {
   if (Array.isArray(value)) {
     if (isCodeList(value)) {
-      out.set(prefix, value.map((w) => w.code).sort().join(', ') || '(none)');
+      out.set(
+        prefix,
+        value
+          .map((w) => w.code)
+          .sort()
+          .join(', ') || '(none)',
+      );
     } else if (value.length > LONG_ARRAY) {
       out.set(`${prefix}.length`, value.length);
       flatten(value[value.length - 1], `${prefix}[last]`, out);
@@ -50,7 +63,10 @@ function compare(before: Scalar, after: Scalar): Pick<FieldDiff, 'change' | 'rel
     if (scale === 0 || Math.abs(after - before) <= SAME_RELATIVE * scale) {
       return { change: 'same', relative: null };
     }
-    return { change: 'changed', relative: before === 0 ? null : (after - before) / Math.abs(before) };
+    return {
+      change: 'changed',
+      relative: before === 0 ? null : (after - before) / Math.abs(before),
+    };
   }
   return { change: before === after ? 'same' : 'changed', relative: null };
 }
@@ -61,11 +77,13 @@ export function diffResults(before: unknown, after: unknown): FieldDiff[] {
   const b = flatten(after);
   const rows: FieldDiff[] = [];
   for (const [path, v] of a) {
-    if (!b.has(path)) rows.push({ path, before: v, after: undefined, change: 'removed', relative: null });
+    if (!b.has(path))
+      rows.push({ path, before: v, after: undefined, change: 'removed', relative: null });
     else rows.push({ path, before: v, after: b.get(path), ...compare(v, b.get(path)!) });
   }
   for (const [path, v] of b) {
-    if (!a.has(path)) rows.push({ path, before: undefined, after: v, change: 'added', relative: null });
+    if (!a.has(path))
+      rows.push({ path, before: undefined, after: v, change: 'added', relative: null });
   }
   return rows;
 }

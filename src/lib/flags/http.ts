@@ -33,7 +33,10 @@ export async function jsonBody(request: Request): Promise<unknown> {
 /** A desk action's refusal as JSON; anything else is re-thrown. */
 export function actionError(err: unknown): Response {
   if (err instanceof FlagActionError) {
-    return Response.json({ error: err.status === 404 ? 'not_found' : 'invalid_request', message: err.message }, { status: err.status });
+    return Response.json(
+      { error: err.status === 404 ? 'not_found' : 'invalid_request', message: err.message },
+      { status: err.status },
+    );
   }
   throw err;
 }

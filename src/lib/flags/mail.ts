@@ -31,7 +31,11 @@ export async function sendReceivedEmail(p: {
 }
 
 /** Send a support reply to the reporter. False when sending failed. */
-export async function sendReplyEmail(p: { to: string; flagId: string; body: string }): Promise<boolean> {
+export async function sendReplyEmail(p: {
+  to: string;
+  flagId: string;
+  body: string;
+}): Promise<boolean> {
   const text = [
     'Drainwright support replied about the result you flagged:',
     '',
@@ -61,12 +65,20 @@ function htmlOf(text: string): string {
   return `<div style="font-family:sans-serif;color:#14212b;line-height:1.5">${body}</div>`;
 }
 
-async function deliver(m: { to: string; subject: string; text: string; tag: string }): Promise<boolean> {
+async function deliver(m: {
+  to: string;
+  subject: string;
+  text: string;
+  tag: string;
+}): Promise<boolean> {
   try {
     await sendEmail({ to: m.to, subject: m.subject, text: m.text, html: htmlOf(m.text) });
     return true;
   } catch (err) {
-    console.error(`flag e-mail "${m.tag}" to ${m.to} failed:`, err instanceof Error ? err.message : err);
+    console.error(
+      `flag e-mail "${m.tag}" to ${m.to} failed:`,
+      err instanceof Error ? err.message : err,
+    );
     return false;
   }
 }

@@ -1,5 +1,9 @@
 import type { QuickState } from '../calculators/quick-check';
-import { quickDrainRequest, quickLineRequest, quickSiphonRequest } from '../calculators/quick-check';
+import {
+  quickDrainRequest,
+  quickLineRequest,
+  quickSiphonRequest,
+} from '../calculators/quick-check';
 import type { QuickAnswer, QuickError } from '../calculators/quick-result';
 import { findSize } from '../hydraulics';
 import type { FlagTool } from './labels';
@@ -20,7 +24,9 @@ export function quickFlag(s: QuickState, answer: QuickAnswer | QuickError): Quic
   const size = findSize(s.size);
   if ('error' in answer || !size) return null;
   const d = size.inner_diameter_m;
-  if (s.mode === 'siphon') return { tool: 'siphon', inputs: quickSiphonRequest(s, d, size.material), results: answer.raw };
-  if (s.mode === 'line') return { tool: 'line', inputs: quickLineRequest(s, d, size.material), results: answer.raw };
+  if (s.mode === 'siphon')
+    return { tool: 'siphon', inputs: quickSiphonRequest(s, d, size.material), results: answer.raw };
+  if (s.mode === 'line')
+    return { tool: 'line', inputs: quickLineRequest(s, d, size.material), results: answer.raw };
   return { tool: 'drain', inputs: quickDrainRequest(s, d, size.material), results: answer.raw };
 }

@@ -11,10 +11,7 @@ export function flagsOfUser(db: Db, user: { id: string; email: string }): FlagDe
     .select({ id: flags.id })
     .from(flags)
     .where(
-      or(
-        eq(flags.reporterUserId, user.id),
-        eq(flags.reporterEmail, sql`lower(${user.email})`),
-      ),
+      or(eq(flags.reporterUserId, user.id), eq(flags.reporterEmail, sql`lower(${user.email})`)),
     )
     .orderBy(desc(flags.createdAt))
     .limit(100)

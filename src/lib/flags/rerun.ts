@@ -1,4 +1,10 @@
-import { ENGINE_VERSION, EngineInputError, solveDrain, solveLine, solveSiphon } from '../hydraulics';
+import {
+  ENGINE_VERSION,
+  EngineInputError,
+  solveDrain,
+  solveLine,
+  solveSiphon,
+} from '../hydraulics';
 import type { DrainRequest, LineRequest, SiphonRequest } from '../hydraulics';
 import { diffResults } from './diff';
 import type { FieldDiff } from './diff';
@@ -24,7 +30,11 @@ export function rerunSnapshot(tool: FlagTool, inputs: unknown, frozenResults: un
     return { ok: true, engineVersion: ENGINE_VERSION, results, diffs, changed };
   } catch (err) {
     if (err instanceof EngineInputError) {
-      return { ok: false, engineVersion: ENGINE_VERSION, error: { path: err.path, message: err.message } };
+      return {
+        ok: false,
+        engineVersion: ENGINE_VERSION,
+        error: { path: err.path, message: err.message },
+      };
     }
     // Malformed frozen inputs (missing objects, wrong types) surface as TypeErrors in the engine.
     const message = err instanceof Error ? err.message : String(err);

@@ -58,7 +58,15 @@ export async function addReply(
   const emailStatus = sent ? 'sent' : 'failed';
   const id = newId('fmsg');
   db.insert(flagMessages)
-    .values({ id, flagId, kind: 'reply', authorUserId: actor.id, body, emailStatus, createdAt: new Date() })
+    .values({
+      id,
+      flagId,
+      kind: 'reply',
+      authorUserId: actor.id,
+      body,
+      emailStatus,
+      createdAt: new Date(),
+    })
     .run();
   const moveOn = sent && (flag.status === 'new' || flag.status === 'in_hand');
   touch(db, flagId, moveOn ? { status: 'answered' } : {});

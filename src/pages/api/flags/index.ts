@@ -11,7 +11,10 @@ export const POST: APIRoute = async ({ request, locals, clientAddress }) => {
   const wait = await takeFlagPoint(clientAddress);
   if (wait !== null) {
     return Response.json(
-      { error: 'rate_limited', message: `Too many flags from this address; try again in ${wait} s.` },
+      {
+        error: 'rate_limited',
+        message: `Too many flags from this address; try again in ${wait} s.`,
+      },
       { status: 429, headers: { 'Retry-After': String(wait) } },
     );
   }
@@ -33,6 +36,11 @@ export const POST: APIRoute = async ({ request, locals, clientAddress }) => {
     organisationId: locals.organisation?.id ?? null,
   };
   const { id, token } = createFlag(getDb(), parsed.data, reporter);
-  const emailed = await sendReceivedEmail({ to: email, flagId: id, token, reason: parsed.data.reason });
+  const emailed = await sendReceivedEmail({
+    to: email,
+    flagId: id,
+    token,
+    reason: parsed.data.reason,
+  });
   return Response.json({ id, status: 'new', emailed }, { status: 201 });
 };

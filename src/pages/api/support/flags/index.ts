@@ -13,6 +13,9 @@ export const GET: APIRoute = ({ url, locals }) => {
   if (!parsed.success) return invalid(parsed.error);
   const db = getDb();
   const page = listQueue(db, parsed.data);
-  recordAudit(db, actor, 'queue.view', null, { ...parsed.data, shown: page.flags.map((f) => f.id) });
+  recordAudit(db, actor, 'queue.view', null, {
+    ...parsed.data,
+    shown: page.flags.map((f) => f.id),
+  });
   return Response.json(page, { headers: { 'Cache-Control': 'no-store' } });
 };
