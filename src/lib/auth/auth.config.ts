@@ -16,17 +16,15 @@ const SESSION_DAYS = 30;
 
 /** The adapter, built on first use so importing this file opens no database (e.g. at build). */
 let adapter: Adapter | undefined;
-const lazyAdapter = new Proxy({} as Adapter, {
-  get(_target, prop) {
-    adapter ??= DrizzleAdapter(getDb(), {
-      usersTable: users,
-      accountsTable: accounts,
-      sessionsTable: sessions,
-      verificationTokensTable: verificationTokens,
-    });
-    return adapter[prop as keyof Adapter];
-  },
-});
+function lazyAdapter(): Adapter {
+  adapter ??= DrizzleAdapter(getDb(), {
+    usersTable: users,
+    accountsTable: accounts,
+    sessionsTable: sessions,
+    verificationTokensTable: verificationTokens,
+  });
+  return adapter;
+}
 
 /** Cookies get the Secure flag (and __Secure-/__Host- names) in production or behind https. */
 function secureCookies(): boolean {
@@ -44,7 +42,9 @@ const config = defineConfig({
   },
   // Host names are checked by Astro (security.allowedDomains) before a request gets here.
   trustHost: true,
-  adapter: lazyAdapter,
+  get adapter(): Adapter {
+    return lazyAdapter();
+  },
   session: { strategy: 'database', maxAge: SESSION_DAYS * 86_400, updateAge: 86_400 },
   get useSecureCookies(): boolean {
     return secureCookies();
