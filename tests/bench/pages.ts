@@ -121,12 +121,17 @@ async function main(): Promise<void> {
   const browser = await launchBrowser();
   const rows: Row[] = [];
   try {
-    for (const path of PAGES) rows.push(await measure(browser, base, path));
+    for (const path of PAGES) {
+      rows.push(await measure(browser, base, path));
+      console.error(`measured ${path}`);
+    }
     if (!process.env.BENCH_SKIP_LIGHTHOUSE) {
       const lh = await openLighthouse();
       try {
         for (const row of rows) {
-          if (row.status === 200) Object.assign(row, await lh.scores(base + row.page, LH_RUNS));
+          if (row.status !== 200) continue;
+          Object.assign(row, await lh.scores(base + row.page, LH_RUNS));
+          console.error(`lighthouse ${row.page}: ${row.perf} / ${row.a11y}`);
         }
       } finally {
         lh.close();
