@@ -4,7 +4,7 @@ import { auditEntries } from '../../db/schema';
 import type { Db } from '../../src/lib/db/client';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
-import { ADMIN_ID, appDb, prepareDesk, sessionCookie } from './helpers';
+import { assertPortFree, ADMIN_ID, appDb, prepareDesk, sessionCookie } from './helpers';
 
 // Role tests for every flag and support-desk route, on the real server with the real route table.
 const PORT = 46600;
@@ -123,6 +123,7 @@ function auditCount(userId: string, action: string): number {
 }
 
 beforeAll(async () => {
+  await assertPortFree(PORT);
   app = await startApp(PORT, { FLAGS_PER_WINDOW: '1000' });
   db = appDb(app.dataDir);
   prepareDesk(db);

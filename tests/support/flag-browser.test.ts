@@ -4,7 +4,14 @@ import type { Db } from '../../src/lib/db/client';
 import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
-import { appDb, prepareDesk, sessionCookie, threadLink, waitForEmail } from './helpers';
+import {
+  assertPortFree,
+  appDb,
+  prepareDesk,
+  sessionCookie,
+  threadLink,
+  waitForEmail,
+} from './helpers';
 
 // A crew member on a phone flags a quick-check result signed out; support answers from the desk
 // (also on a phone); the reporter's e-mail arrives in the fake inbox and its link shows the reply.
@@ -19,6 +26,7 @@ let db: Db;
 let browser: Browser;
 
 beforeAll(async () => {
+  await assertPortFree(PORT);
   app = await startApp(PORT, { FLAGS_PER_WINDOW: '1000' });
   db = appDb(app.dataDir);
   prepareDesk(db);

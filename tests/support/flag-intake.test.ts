@@ -4,7 +4,14 @@ import { flags } from '../../db/schema';
 import type { Db } from '../../src/lib/db/client';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
-import { appDb, prepareDesk, sessionCookie, threadLink, waitForEmail } from './helpers';
+import {
+  assertPortFree,
+  appDb,
+  prepareDesk,
+  sessionCookie,
+  threadLink,
+  waitForEmail,
+} from './helpers';
 
 // POST /api/flags end to end: validation, the reporter's e-mail with its link, a reply by e-mail
 // through the real resend SDK into the e-mail fake, and the reporter's own views.
@@ -46,6 +53,7 @@ async function page(path: string, cookie?: string): Promise<{ status: number; ht
 }
 
 beforeAll(async () => {
+  await assertPortFree(PORT);
   app = await startApp(PORT, { FLAGS_PER_WINDOW: '1000' });
   db = appDb(app.dataDir);
   prepareDesk(db);

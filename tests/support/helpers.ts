@@ -81,3 +81,17 @@ export function threadLink(e: FakeEmail): string {
   if (!m) throw new Error('no thread link in the e-mail');
   return m[0];
 }
+
+/**
+ * Fail fast when something already answers on a test port (an app left over from an aborted
+ * run would otherwise answer the health check, and its database is not the one we prepare).
+ */
+export async function assertPortFree(port: number): Promise<void> {
+  const taken = await fetch(`http://127.0.0.1:${port}/api/health`, {
+    signal: AbortSignal.timeout(500),
+  }).then(
+    () => true,
+    () => false,
+  );
+  if (taken) throw new Error(`port ${port} is already in use; stop the leftover server first`);
+}

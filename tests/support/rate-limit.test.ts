@@ -1,12 +1,14 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
+import { assertPortFree } from './helpers';
 
 // A small limit so the test reaches it; the default is 10 flags per IP per 15 minutes.
 const PORT = 46604;
 let app: StartedApp;
 
 beforeAll(async () => {
+  await assertPortFree(PORT);
   app = await startApp(PORT, { FLAGS_PER_WINDOW: '3', FLAG_WINDOW_SECONDS: '600' });
 });
 afterAll(async () => {
