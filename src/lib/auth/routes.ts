@@ -53,6 +53,11 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/guides', access: 'anyone' },
   { pattern: '/guides/**', access: 'anyone' },
   { pattern: '/pricing', access: 'anyone' },
+  { pattern: '/developers/**', access: 'anyone' },
+  // Read-only report share links (random token, checked by the page).
+  { pattern: '/r/**', access: 'anyone' },
+  // A reporter's view of their flag through the e-mailed link.
+  { pattern: '/flags/[token]', access: 'anyone', session: 'optional' },
   { pattern: '/developers/api', access: 'anyone' },
   { pattern: '/api/health', access: 'anyone' },
   // Public calculation API: cookie-free and CORS-open, so no Origin check (API v1 answers 415 etc.).
@@ -74,12 +79,14 @@ export const ROUTES: readonly RouteRule[] = [
   { pattern: '/app/jobs', access: 'member' },
   { pattern: '/app/jobs/[id]', access: 'member' },
   { pattern: '/app/jobs/[id]/report', access: 'member' },
+  { pattern: '/app/jobs/**', access: 'member' },
   { pattern: '/app/jobs/[id]/report.pdf', access: 'member' },
   { pattern: '/app/flags', access: 'signed_in' },
   { pattern: '/app/flags/**', access: 'signed_in' },
 
   // Team management (owner of the current organisation).
   { pattern: '/api/team/**', access: 'owner' },
+  { pattern: '/api/team', access: 'owner' },
   { pattern: '/api/team/invitations', access: 'owner' },
   { pattern: '/api/team/invitations/[id]', access: 'owner' },
   { pattern: '/api/team/members/[userId]', access: 'owner' },
@@ -103,6 +110,7 @@ export const ROUTES: readonly RouteRule[] = [
 
   // Billing.
   { pattern: '/api/billing/**', access: 'owner' },
+  { pattern: '/api/brand/**', access: 'owner' },
   { pattern: '/api/webhooks/**', access: 'anyone', originExempt: true },
 
   // Flags: anyone may flag a result; the reporter reads theirs signed in or by e-mailed link.
