@@ -44,8 +44,9 @@ export async function requestSignInLink(email: string, next: string, origin: str
     options,
   );
   const location = response.headers.get('location') ?? '';
-  if (location.includes('/signin/sent')) return { ok: true };
-  const error = location ? new URL(location, base).searchParams.get('error') : null;
+  const error = location ? new URL(location, base).searchParams.get('error') : 'NoRedirect';
+  if (!error && response.status >= 300 && response.status < 400) return { ok: true };
+  console.error(`sign-in link request failed: ${response.status} ${location}`);
   return { ok: false, reason: error === 'EmailSignin' ? 'The sign-in e-mail could not be sent.' : 'Sign-in failed.' };
 }
 
