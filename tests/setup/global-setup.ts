@@ -39,7 +39,8 @@ function build(): void {
   const astro = path.join(root, 'node_modules', '.bin', 'astro');
   const result = spawnSync(astro, ['build'], {
     stdio: ['ignore', 'ignore', 'inherit'],
-    env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' },
+    // vitest sets NODE_ENV=test, which would make Vite bundle React's development build.
+    env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', NODE_ENV: 'production' },
   });
   if (result.status !== 0) throw new Error('astro build failed before the tests');
 }

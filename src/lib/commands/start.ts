@@ -41,7 +41,10 @@ async function main(): Promise<void> {
 
   if (!dev && buildIsStale(root)) {
     console.log('Building Drainwright (sources changed since the last build)…');
-    const code = await supervise(spawn(astroBin, ['build'], { stdio: 'inherit', env: process.env }));
+    const code = await supervise(spawn(astroBin, ['build'], {
+        stdio: 'inherit',
+        env: { ...process.env, NODE_ENV: 'production' },
+      }));
     if (code !== 0) throw new Error('astro build failed');
   }
 
