@@ -11,7 +11,16 @@ export function watchErrors(page: Page): string[] {
 /** Open a path and wait until every island has hydrated. */
 export async function openHydrated(page: Page, path: string): Promise<void> {
   await page.goto(path);
-  await page.waitForFunction(() => document.querySelectorAll('astro-island[ssr]').length === 0);
+  await calculatorReady(page);
+}
+
+/** Wait until the islands have hydrated and a calculator has applied the link's inputs. */
+export async function calculatorReady(page: Page): Promise<void> {
+  await page.waitForFunction(
+    () =>
+      document.querySelectorAll('astro-island[ssr]').length === 0 &&
+      (!location.pathname.match(/^\/(check|siphon|gravity-line|drain)/) || document.documentElement.dataset.calcReady === '1'),
+  );
 }
 
 /** Widest right edge of any element minus the viewport width, and the document's own overflow. */

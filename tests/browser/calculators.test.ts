@@ -6,7 +6,7 @@ import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 import { formatQuantity, solveSiphon } from '../../src/lib/hydraulics';
 import { quickSiphonRequest, QUICK_DEFAULTS } from '../../src/lib/calculators/quick-check';
-import { figure, leadingNumber, openHydrated, sidewaysOverflow, watchErrors } from './calculators-helpers';
+import { calculatorReady, figure, leadingNumber, openHydrated, sidewaysOverflow, watchErrors } from './calculators-helpers';
 
 let app: StartedApp;
 let browser: Browser;
@@ -34,7 +34,7 @@ describe('quick check on a phone', () => {
       await openHydrated(page, '/');
       await page.locator(`[data-start="${mode}"]`).click();
       await page.waitForURL(/\/check/);
-      await page.waitForFunction(() => document.querySelectorAll('astro-island[ssr]').length === 0);
+      await calculatorReady(page);
       await expect(page.getByTestId('verdict-word').textContent()).resolves.toBe(word);
       expect(await page.locator('[data-verdict]').getAttribute('data-verdict')).toBe('runs');
       expect(await figure(page, 'flow')).toMatch(/L\/s$/);
@@ -88,7 +88,7 @@ describe('quick check on a phone', () => {
     const gpm = leadingNumber(await figure(page, 'flow'));
     expect(gpm / litres).toBeCloseTo(60 / 3.785411784, 1); // both shown to 3 significant figures
     await page.reload();
-    await page.waitForFunction(() => document.querySelectorAll('astro-island[ssr]').length === 0);
+    await calculatorReady(page);
     expect(await page.getByRole('button', { name: 'US units' }).getAttribute('aria-pressed')).toBe('true');
   });
 

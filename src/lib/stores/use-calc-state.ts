@@ -49,6 +49,8 @@ export function useCalcState<T extends ShareState>(
     if (!loaded) return;
     const url = `${window.location.pathname}${query ? `?${query}` : ''}${window.location.hash}`;
     window.history.replaceState(window.history.state, '', url);
+    // runs after the commit that shows the link's inputs: tells tests and scripts they are applied
+    document.documentElement.dataset.calcReady = '1';
   }, [query, loaded]);
   const update = useCallback((patch: Partial<T>) => setState((s) => ({ ...s, ...patch })), []);
   return { state, update, query };
