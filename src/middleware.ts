@@ -19,6 +19,13 @@ export const onRequest = defineMiddleware(async (context, next) => {
   // Astro's cross-site form check, done here so that /api/v1/ is left out (see origin-check.ts).
   const response =
     refuseCrossSiteForm(context.request, context.url) ?? guard(context) ?? (await next());
-  response.headers.set('X-Request-Id', context.locals.requestId);
-  return response;
+  try {
+    response.headers.set('X-Request-Id', context.locals.requestId);
+    return response;
+  } catch {
+    // Response.redirect() (used by Auth.js) has immutable headers: answer with a copy.
+    const copy = new Response(response.body, response);
+    copy.headers.set('X-Request-Id', context.locals.requestId);
+    return copy;
+  }
 });
