@@ -1,6 +1,7 @@
 import type { Db } from '../src/lib/db/client';
 import { calculations, jobs, memberships, organisations, users } from './schema';
 import { demoCalculations } from './seed-calculations';
+import { seedFlags } from './seed-flags';
 
 /**
  * The demo scenario: an invented dewatering firm, its crew, our support desk and a free user.
@@ -88,4 +89,5 @@ export function seedDemo(db: Db): void {
         .run();
     }
   });
+  seedFlags(db);
 }
