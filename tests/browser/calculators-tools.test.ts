@@ -82,7 +82,8 @@ describe('full calculator tools on a phone', () => {
     const upload = page.getByTestId('stage-upload');
     const good = 'depth (m),area (m2)\n0,10\n0.4,14\n0.8,19\n1.2,25\n';
     await upload.setInputFiles({ name: 'pond.csv', mimeType: 'text/csv', buffer: Buffer.from(good) });
-    await expect(page.getByTestId('stage-count').textContent()).resolves.toContain('4 levels');
+    // the file is read asynchronously: wait for the table to take it
+    await page.waitForFunction(() => document.querySelector('[data-testid="stage-count"]')?.textContent?.includes('4 levels'));
     // Volume of a table with area linear in depth: trapezoid rule is exact, Σ (A1 + A2)/2·Δh
     // = 0.4·(12 + 16.5 + 22) = 20.2 m³ = 20 200 L.
     expect(await figure(page, 'volume')).toBe('20\u202f200 L');
