@@ -8,7 +8,7 @@ let t: JobsApp;
 const OWNER = 'usr_demo_owner';
 
 beforeAll(async () => {
-  t = await startJobsApp(46702);
+  t = await startJobsApp(46797);
 }, 120_000);
 afterAll(async () => {
   t?.db.close();
@@ -86,18 +86,19 @@ describe('report PDF and e-mail', () => {
   });
 
   test('does send the PDF to the client through the e-mail fake', async () => {
-    const env = inject('fakeEnv');
+    // The app runs its own e-mail fake and prints its address in the start banner.
+    const fake = /fake resend: (\S+)/.exec(t.app.output())?.[1] ?? inject('fakeEnv').FAKE_RESEND_URL;
     const to = `client-${Date.now()}@example.test`;
     const r = await fetch(`${t.app.url}/api/jobs/job_demo_koi/report/email`, {
       method: 'POST',
       headers: { ...t.as(OWNER), 'content-type': 'application/json' },
       body: JSON.stringify({ to, message: 'As discussed on site.' }),
     });
-    expect(r.status).toBe(202);
+    expect(r.status, `${await r.clone().text()} via ${fake}`).toBe(202);
     const auth = { Authorization: 'Bearer re_fake_test' };
-    const list = await (await fetch(`${env.FAKE_RESEND_URL}/emails?to=${encodeURIComponent(to)}`, { headers: auth })).json();
+    const list = await (await fetch(`${fake}/emails?to=${encodeURIComponent(to)}`, { headers: auth })).json();
     expect(list.data).toHaveLength(1);
-    const atts = await (await fetch(`${env.FAKE_RESEND_URL}/emails/${list.data[0].id}/attachments`, { headers: auth })).json();
+    const atts = await (await fetch(`${fake}/emails/${list.data[0].id}/attachments`, { headers: auth })).json();
     const pdf = await (await fetch(atts.data[0].download_url)).arrayBuffer();
     expect(Buffer.from(pdf).subarray(0, 5).toString()).toBe('%PDF-');
     expect(await pdfText(pdf)).toContain('Heronsgate Test Brand');
