@@ -30,7 +30,10 @@ export default function ChartPanel({ title, table, chart }: Props): ReactElement
           <Suspense fallback={<p className="text-ink-faint">Loading the chart…</p>}>{chart()}</Suspense>
         </div>
       )}
-      <div className="mt-2 max-h-72 overflow-auto">{table}</div>
+      {/* Focusable so keyboard users can scroll a long table. */}
+      <div className="mt-2 max-h-72 overflow-auto" tabIndex={0} role="region" aria-label={`${title}: table`}>
+        {table}
+      </div>
     </section>
   );
 }
