@@ -25,7 +25,12 @@ export function linksIn(e: StoredEmail): string[] {
 }
 
 function unescapeAttr(value: string): string {
-  return value.replace(/&amp;/g, '&').replace(/&#x2F;/gi, '/').replace(/&#47;/g, '/');
+  const named: Record<string, string> = { amp: '&', quot: '"', lt: '<', gt: '>', apos: "'" };
+  return value.replace(/&(#x[0-9a-f]+|#\d+|amp|quot|lt|gt|apos);/gi, (_m, code: string) => {
+    if (code[0] !== '#') return named[code.toLowerCase()];
+    const n = code[1].toLowerCase() === 'x' ? Number.parseInt(code.slice(2), 16) : Number(code.slice(1));
+    return String.fromCodePoint(n);
+  });
 }
 
 /** The inbox: newest first, filterable by recipient. */

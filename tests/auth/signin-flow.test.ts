@@ -1,0 +1,73 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser, phoneContext } from '../helpers/browser';
+import { startApp } from '../helpers/server';
+import type { StartedApp } from '../helpers/server';
+
+// The real start command (built app, migrations, seed, fakes) and Debian chromium at 360 × 740.
+const PORT = 46320;
+const INBOX = 'http://127.0.0.1:46321';
+let app: StartedApp;
+let browser: Browser;
+
+beforeAll(async () => {
+  app = await startApp(PORT, { FAKE_RESEND_PORT: '46321' });
+  browser = await launchBrowser();
+}, 180_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await app?.stop();
+});
+
+async function latestLink(to: string): Promise<string> {
+  const list = (await (await fetch(`${INBOX}/emails?to=${encodeURIComponent(to)}`, { headers: { Authorization: 'Bearer re_fake_test' } })).json()) as {
+    data: { text: string }[];
+  };
+  return /https?:\/\/\S+/.exec(list.data[0].text)![0];
+}
+
+describe('sign-in by e-mail link', () => {
+  test('does sign the owner in on a phone: request a link, open it from the fake inbox, land on /app', async () => {
+    const context = await phoneContext(browser, app.url);
+    const page = await context.newPage();
+    await page.goto('/app/team');
+    expect(new URL(page.url()).pathname).toBe('/signin');
+    await page.fill('#email', 'rosa@heronsgate.example');
+    await page.click('button[type=submit]');
+    await page.waitForURL(/\/signin\/sent/);
+    await page.goto(`${INBOX}/?to=rosa@heronsgate.example`);
+    await page.click('a[href^="/m/"]');
+    await page.click('a.message-link');
+    await page.waitForURL(`${app.url}/app/team`);
+    expect(await page.textContent('h1')).toContain('Heronsgate');
+    const width = await page.evaluate(() => document.documentElement.scrollWidth);
+    expect(width).toBeLessThanOrEqual(360);
+    await context.close();
+  });
+
+  test('does refuse a used link, signed-out API calls, crew on owner APIs and cross-site posts', async () => {
+    const used = await latestLink('rosa@heronsgate.example');
+    const again = await fetch(used, { redirect: 'manual' });
+    expect(again.status).toBe(302);
+    expect(again.headers.get('location')).toContain('error=Verification');
+    expect((await fetch(`${app.url}/api/team`)).status).toBe(401);
+    const form = new URLSearchParams({ email: 'tomas@heronsgate.example', next: '/app' });
+    const sent = await fetch(`${app.url}/signin`, { method: 'POST', body: form, headers: { Origin: app.url }, redirect: 'manual' });
+    expect(sent.status).toBe(303);
+    const callback = await fetch(await latestLink('tomas@heronsgate.example'), { redirect: 'manual' });
+    const cookie = callback.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    expect(cookie).toContain('authjs.session-token=');
+    expect(callback.headers.getSetCookie().join(' ')).toMatch(/HttpOnly/i);
+    const crew = await fetch(`${app.url}/api/team`, { headers: { Cookie: cookie } });
+    expect(crew.status).toBe(403);
+    expect(await crew.json()).toEqual({ error: 'forbidden' });
+    expect((await fetch(`${app.url}/app`, { headers: { Cookie: cookie } })).status).toBe(200);
+    const forged = await fetch(`${app.url}/api/team/invitations`, {
+      method: 'POST',
+      headers: { Cookie: cookie, Origin: 'https://elsewhere.example', 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: 'x@y.test' }),
+    });
+    expect(forged.status).toBe(403);
+  });
+});
