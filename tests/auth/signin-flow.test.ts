@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, phoneContext } from '../helpers/browser';
+import { ROUTES } from '../../src/lib/auth/routes';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
@@ -69,5 +70,30 @@ describe('sign-in by e-mail link', () => {
       body: JSON.stringify({ email: 'x@y.test' }),
     });
     expect(forged.status).toBe(403);
+  });
+
+  test('does refuse another organisation\'s owner on every resource-id API route (IDOR)', async () => {
+    // Heronsgate's seeded ids; an unknown parameter name fails the test so new routes get a sample.
+    const SAMPLES: Record<string, string> = { id: 'job_demo_koi', cid: 'calc_demo_koi', userId: 'usr_demo_crew1', sid: 'share_x' };
+    const form = new URLSearchParams({ email: 'lee@pondkeeper.example', next: '/app' });
+    await fetch(`${app.url}/signin`, { method: 'POST', body: form, headers: { Origin: app.url }, redirect: 'manual' });
+    const callback = await fetch(await latestLink('lee@pondkeeper.example'), { redirect: 'manual' });
+    const cookie = callback.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const routes = ROUTES.filter((r) => r.pattern.startsWith('/api/') && r.pattern.includes('[') && r.access !== 'anyone');
+    expect(routes.length).toBeGreaterThan(3);
+    for (const r of routes) {
+      const url = r.pattern.replace(/\[([^\]]+)\]/g, (_m, name: string) => {
+        expect(SAMPLES, `sample id for [${name}] in ${r.pattern}`).toHaveProperty(name);
+        return SAMPLES[name];
+      });
+      for (const method of ['GET', 'PATCH', 'DELETE']) {
+        const res = await fetch(`${app.url}${url}`, {
+          method,
+          headers: { Cookie: cookie, Origin: app.url, 'Content-Type': 'application/json' },
+          body: method === 'PATCH' ? JSON.stringify({ role: 'owner' }) : undefined,
+        });
+        expect([400, 403, 404, 405], `${method} ${url}`).toContain(res.status);
+      }
+    }
   });
 });
