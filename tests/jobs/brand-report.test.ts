@@ -17,7 +17,7 @@ afterAll(async () => {
 
 function upload(bytes: Uint8Array, name: string, type: string): Promise<Response> {
   const form = new FormData();
-  form.set('logo', new Blob([bytes], { type }), name);
+  form.set('logo', new Blob([new Uint8Array(bytes)], { type }), name);
   return fetch(`${t.app.url}/api/brand/logo`, { method: 'POST', headers: t.as(OWNER), body: form });
 }
 
