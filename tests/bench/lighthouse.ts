@@ -1,17 +1,7 @@
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
+import { CHROMIUM_FLAGS as CHROME_FLAGS } from '../helpers/browser';
 
-/** The same flags as tests/helpers/browser.ts: Debian's chromium, kept off the network. */
-const CHROME_FLAGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
 
 export interface LighthouseScores {
   perf: number;
@@ -33,7 +23,7 @@ export interface LighthouseRunner {
 export async function openLighthouse(): Promise<LighthouseRunner> {
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
-    chromeFlags: CHROME_FLAGS,
+    chromeFlags: [...CHROME_FLAGS],
   });
   const once = async (url: string): Promise<LighthouseScores> => {
     const result = await lighthouse(url, {

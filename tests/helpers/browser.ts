@@ -4,20 +4,23 @@ import path from 'node:path';
 import { chromium } from 'playwright-core';
 import type { Browser, BrowserContext } from 'playwright-core';
 
-/** Debian's chromium, never a downloaded browser; flags keep it off this machine's closed network. */
+/** Flags for Debian's chromium that keep it headless and off this machine's closed network. */
+export const CHROMIUM_FLAGS: readonly string[] = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** Debian's chromium, never a downloaded browser. */
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
+    args: [...CHROMIUM_FLAGS],
   });
 }
 
