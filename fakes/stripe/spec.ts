@@ -10,14 +10,16 @@ export const FAKE_STRIPE_WEBHOOK_SECRET = 'whsec_drainwright_local_fake';
 
 /**
  * The payments fake's port: FAKE_STRIPE_PORT, else 4620 beside the default app port, else the
- * app's PORT + 10100 so apps started side by side (tests, engineers) do not share one fake.
+ * app's PORT + 12000 so apps started side by side (tests, engineers) do not share one fake, and the
+ * range never meets the e-mail fake's PORT + 10000 while the app ports in use span < 2000 (tests
+ * use 46100–47999).
  */
 export function stripePort(): number {
   const explicit = Number.parseInt(process.env.FAKE_STRIPE_PORT ?? '', 10);
   if (Number.isFinite(explicit) && explicit > 0) return explicit;
   const app = Number.parseInt(process.env.PORT ?? '', 10);
-  if (!Number.isFinite(app) || app === 4321 || app + 10_100 > 65_535) return 4620;
-  return app + 10_100;
+  if (!Number.isFinite(app) || app === 4321 || app + 12_000 > 65_535) return 4620;
+  return app + 12_000;
 }
 
 /** The fake delivers events to the app's own webhook route, found from PUBLIC_URL. */
