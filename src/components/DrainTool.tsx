@@ -21,6 +21,7 @@ import TankSchematic from './TankSchematic';
 import ToolLayout, { HintList, InputGroup, InputProblem } from './ToolLayout';
 import VerdictBanner from './VerdictBanner';
 import VesselFields from './VesselFields';
+import ResultActions from './ResultActions';
 import WarningList from './WarningList';
 import WaterSiteFields from './WaterSiteFields';
 
@@ -86,6 +87,7 @@ export default function DrainTool(): ReactElement {
         <p data-testid="limits">It stops when {STOP_WORDS[out.r.stop_reason]}.</p>
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={cautions} />
+        <ResultActions tool="drain" inputs={out.req} results={out.r} unitSystem={system} path="/drain" query={query} />
         <TankSchematic s={s} system={system} />
         {out.r.status !== 'no_flow' && (
           <ChartPanel

@@ -19,6 +19,7 @@ import NumberField from './NumberField';
 import ShareLink from './ShareLink';
 import ToolLayout, { HintList, InputGroup, InputProblem } from './ToolLayout';
 import VerdictBanner from './VerdictBanner';
+import ResultActions from './ResultActions';
 import WarningList from './WarningList';
 import WaterSiteFields from './WaterSiteFields';
 
@@ -69,6 +70,7 @@ export default function GravityLineTool(): ReactElement {
         )}
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={['intake-entrapment', 'discharge', 'estimates']} />
+        <ResultActions tool="line" inputs={out.req} results={out.r} unitSystem={system} path="/gravity-line" query={query} />
         <LineSchematic sourceLevelM={s.source_level_m} outletM={s.outlet_m} tailwaterM={s.has_tail ? s.tailwater_m : undefined} system={system} />
         <LossPanel r={out.r} system={system} />
         <HintList hints={out.hints} />

@@ -24,6 +24,7 @@ import ShareLink from './ShareLink';
 import SiphonCrestFields from './SiphonCrestFields';
 import ToolLayout, { HintList, InputGroup, InputProblem } from './ToolLayout';
 import VerdictBanner from './VerdictBanner';
+import ResultActions from './ResultActions';
 import WarningList from './WarningList';
 import WaterSiteFields from './WaterSiteFields';
 
@@ -99,6 +100,7 @@ export default function SiphonTool(): ReactElement {
       </ul>
       <WarningList warnings={r.warnings} />
       <CautionNotes ids={['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates']} />
+      <ResultActions tool="siphon" inputs={out.req} results={r} unitSystem={system} path="/siphon" query={query} />
       <LineSchematic sourceLevelM={s.source_level_m} outletM={s.outlet_m} crestM={s.crest_m} tailwaterM={s.has_tail ? s.tailwater_m : undefined} system={system} />
       {out.profile.length > 0 && (
         <ChartPanel
