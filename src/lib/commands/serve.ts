@@ -13,6 +13,22 @@ type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
 
 const GRACE_MS = 10_000;
 
+/**
+ * A response sent before its request body was read (413, 415, early 4xx) must not leave the rest
+ * of that body on a keep-alive socket, where the client's next request would queue behind it and
+ * stall. Such answers close the connection; what arrived of the body is drained.
+ */
+function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerResponse): void {
+  const writeHead = res.writeHead.bind(res) as (...args: unknown[]) => http.ServerResponse;
+  res.writeHead = ((...args: unknown[]) => {
+    if (!req.complete) res.setHeader('Connection', 'close');
+    return writeHead(...args);
+  }) as typeof res.writeHead;
+  res.once('finish', () => {
+    if (!req.complete) req.resume();
+  });
+}
+
 async function main(): Promise<void> {
   process.env.ASTRO_NODE_AUTOSTART = 'disabled';
   const config = getConfig();
@@ -22,6 +38,7 @@ async function main(): Promise<void> {
 
   const server = http.createServer((req, res) => {
     for (const [name, value] of headers) res.setHeader(name, value);
+    closeIfBodyUnread(req, res);
     handler(req, res);
   });
   server.keepAliveTimeout = 5_000;
