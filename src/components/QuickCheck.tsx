@@ -4,6 +4,7 @@ import type { QuickMode, QuickState } from '../lib/calculators/quick-check';
 import { QUICK_DEFAULTS } from '../lib/calculators/quick-check';
 import type { QuickAnswer } from '../lib/calculators/quick-result';
 import { quickAnswer } from '../lib/calculators/quick-result';
+import { quickFlag } from '../lib/flags/quick-flag';
 import type { UnitSystem } from '../lib/hydraulics/units';
 import { formatQuantity } from '../lib/hydraulics/units';
 import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
@@ -11,8 +12,7 @@ import CautionNotes from './CautionNotes';
 import ChoiceButtons from './ChoiceButtons';
 import FigureList from './FigureList';
 import QuickInputs from './QuickInputs';
-import QuickFlagResult from './QuickFlagResult';
-import QuickSaveToJob from './QuickSaveToJob';
+import ResultActions from './ResultActions';
 import ShareLink from './ShareLink';
 import UnitToggle from './UnitToggle';
 import VerdictBanner from './VerdictBanner';
@@ -87,8 +87,7 @@ export default function QuickCheck(): ReactElement {
               <FigureList figures={answer.figures} system={system} />
               <Limits a={answer} system={system} />
               <WarningList warnings={answer.warnings} />
-              <QuickFlagResult state={state} answer={answer} system={system} />
-              <QuickSaveToJob state={state} answer={answer} system={system} query={query} />
+              <QuickActions state={state} answer={answer} system={system} query={query} />
             </section>
             <CautionNotes ids={answer.cautions} />
           </>
@@ -113,4 +112,11 @@ export default function QuickCheck(): ReactElement {
       </div>
     </div>
   );
+}
+
+/** Save and flag under the quick check's answer, with the engine request the answer came from. */
+function QuickActions(p: { state: QuickState; answer: QuickAnswer; system: UnitSystem; query: string }): ReactElement | null {
+  const calc = quickFlag(p.state, p.answer);
+  if (!calc) return null;
+  return <ResultActions {...calc} unitSystem={p.system} path="/check" query={p.query} />;
 }

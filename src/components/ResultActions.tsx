@@ -3,7 +3,7 @@ import FlagResult from './FlagResult';
 import SaveToJob from './SaveToJob';
 
 /**
- * "Save to a job" and "Flag this result" under a full tool's result, both handed the engine
+ * "Flag this result" and "Save to a job" under a full tool's result, both handed the engine
  * request the result on screen came from, so a saved or flagged result can be re-run exactly.
  */
 export default function ResultActions(p: {
@@ -18,8 +18,8 @@ export default function ResultActions(p: {
   const openPath = p.query ? `${p.path}?${p.query}` : p.path;
   return (
     <div className="flex flex-col gap-3">
-      <SaveToJob tool={p.tool} inputs={p.inputs} unitSystem={p.unitSystem} openPath={openPath} />
       <FlagResult tool={p.tool} inputs={p.inputs} results={p.results} unitSystem={p.unitSystem} />
+      <SaveToJob tool={p.tool} inputs={p.inputs} unitSystem={p.unitSystem} openPath={openPath} />
     </div>
   );
 }

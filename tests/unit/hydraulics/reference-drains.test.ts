@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { solveDrain } from '../../../src/lib/hydraulics/drain';
-import type { DrainRequest, DrainStopReason } from '../../../src/lib/hydraulics/types';
+import type { DrainRequest, DrainResult } from '../../../src/lib/hydraulics/types';
 import { loadFixture, logMax, relDev } from './reference-fixture';
 
 // Reference: drain-downs integrated independently in Python with scipy.integrate.solve_ivp
@@ -12,16 +12,7 @@ import { loadFixture, logMax, relDev } from './reference-fixture';
 interface Row {
   name: string;
   request: DrainRequest;
-  expected: {
-    stop_reason: DrainStopReason;
-    time_s: number;
-    stop_depth_m: number;
-    volume_initial_m3: number;
-    volume_drained_m3: number;
-    volume_left_m3: number;
-    initial_flow_m3_s: number;
-    mean_flow_m3_s: number;
-  };
+  expected: Omit<DrainResult, 'status' | 'curve' | 'warnings' | 'engine_version'>;
   samples: { time_s: number; depth_m: number }[];
 }
 const fx = loadFixture<Row>('drains.json');
