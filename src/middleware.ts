@@ -1,7 +1,7 @@
 import { defineMiddleware } from 'astro:middleware';
-import { randomUUID } from 'node:crypto';
 import { guard } from './lib/auth/guard';
 import { refuseCrossSiteForm } from './lib/api/origin-check';
+import { requestIdFor } from './lib/server/request-id';
 
 /**
  * Runs once per request. Tags each request with an id (echoed as X-Request-Id so a user's report
@@ -11,8 +11,7 @@ import { refuseCrossSiteForm } from './lib/api/origin-check';
  */
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
-  const given = context.request.headers.get('x-request-id');
-  context.locals.requestId = given && /^[\w-]{1,64}$/.test(given) ? given : randomUUID();
+  context.locals.requestId = requestIdFor(context.request.headers.get('x-request-id'));
   context.locals.user = null;
   context.locals.organisation = null;
   context.locals.role = null;
