@@ -57,7 +57,10 @@ export function saveBrand(orgId: string, userId: string | null, fields: BrandFie
 
 /** Point the brand at a new logo (or none); returns the file it replaced, for deletion. */
 export function setLogo(orgId: string, userId: string | null, logo: LogoFields, orgName: string): string | null {
-  const old = getBrand(orgId, orgName).logoFile;
-  upsert(orgId, userId, logo, orgName);
-  return old;
+  // Read and replace together, so the file handed back is exactly the one no row points at now.
+  return getDb().transaction(() => {
+    const old = getBrand(orgId, orgName).logoFile;
+    upsert(orgId, userId, logo, orgName);
+    return old;
+  });
 }

@@ -69,25 +69,30 @@ export function addCalculation(
     createdBy: userId,
     createdAt: new Date(),
   } satisfies CalculationRow;
-  getDb().insert(calculations).values(row).run();
-  touchJob(orgId, jobId, userId);
+  // The snapshot and the job's "changed" stamp are one write: both land or neither does.
+  getDb().transaction((tx) => {
+    tx.insert(calculations).values(row).run();
+    touchJob(orgId, jobId, userId, tx);
+  });
   return row;
 }
 
 /** Delete one calculation; false when it is not this organisation's job's. */
 export function deleteCalculation(orgId: string, jobId: string, calcId: string, userId: string | null): boolean {
-  const res = getDb()
-    .delete(calculations)
-    .where(
-      and(
-        eq(calculations.organisationId, orgId),
-        eq(calculations.jobId, jobId),
-        eq(calculations.id, calcId),
-      ),
-    )
-    .run();
-  if (res.changes) touchJob(orgId, jobId, userId);
-  return res.changes > 0;
+  return getDb().transaction((tx) => {
+    const res = tx
+      .delete(calculations)
+      .where(
+        and(
+          eq(calculations.organisationId, orgId),
+          eq(calculations.jobId, jobId),
+          eq(calculations.id, calcId),
+        ),
+      )
+      .run();
+    if (res.changes) touchJob(orgId, jobId, userId, tx);
+    return res.changes > 0;
+  });
 }
 
 /** Every calculation of an organisation, by job then age (export). */

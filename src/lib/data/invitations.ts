@@ -62,18 +62,21 @@ export function createInvitation(
   if (listMembers(orgId).some((m) => m.email.toLowerCase() === email)) {
     throw new TeamError('already_member', `${email} is already in this organisation.`);
   }
-  const again = listPendingInvitations(orgId, now).find((i) => i.email === email);
-  if (again) revokeInvitation(orgId, again.id, now);
-  if (seatsInUse(orgId, now) >= seatLimit(orgId)) {
-    throw new TeamError('seat_limit', `All ${seatLimit(orgId)} seats are taken. Remove someone or add seats first.`);
-  }
   const token = randomBytes(32).toString('base64url');
   const id = `inv_${randomUUID()}`;
   const expiresAt = new Date(now.getTime() + INVITE_DAYS * 86_400_000);
-  getDb()
-    .insert(invitations)
-    .values({ id, organisationId: orgId, email, role: input.role, tokenHash: hashToken(token), invitedBy: input.invitedBy, createdAt: now, expiresAt })
-    .run();
+  // Withdrawing the earlier link and issuing the new one are one write: a refusal (seats) or a
+  // crash between them must not leave the address with no working link.
+  getDb().transaction((tx) => {
+    const again = listPendingInvitations(orgId, now).find((i) => i.email === email);
+    if (again) revokeInvitation(orgId, again.id, now);
+    if (seatsInUse(orgId, now) >= seatLimit(orgId)) {
+      throw new TeamError('seat_limit', `All ${seatLimit(orgId)} seats are taken. Remove someone or add seats first.`);
+    }
+    tx.insert(invitations)
+      .values({ id, organisationId: orgId, email, role: input.role, tokenHash: hashToken(token), invitedBy: input.invitedBy, createdAt: now, expiresAt })
+      .run();
+  });
   return { id, token, expiresAt };
 }
 

@@ -3,6 +3,7 @@ import { and, asc, count, desc, eq, or, sql } from 'drizzle-orm';
 import type { AnyColumn, SQL } from 'drizzle-orm';
 import { calculations, JOB_STATUSES, jobs } from '../../../db/schema';
 import { getDb } from '../db/client';
+import type { Db } from '../db/client';
 
 export type JobStatus = (typeof JOB_STATUSES)[number];
 export type JobRow = typeof jobs.$inferSelect;
@@ -134,10 +135,17 @@ export function updateJob(orgId: string, jobId: string, userId: string | null, p
   return res.changes ? getJob(orgId, jobId) : null;
 }
 
-/** Mark a job as changed now (a calculation was added or removed). */
-export function touchJob(orgId: string, jobId: string, userId: string | null): void {
-  getDb()
-    .update(jobs)
+/**
+ * Mark a job as changed now (a calculation was added or removed). Pass the transaction when the
+ * change it records is made in one, so both land or neither does.
+ */
+export function touchJob(
+  orgId: string,
+  jobId: string,
+  userId: string | null,
+  db: Pick<Db, 'update'> = getDb(),
+): void {
+  db.update(jobs)
     .set({ updatedBy: userId, updatedAt: new Date() })
     .where(and(eq(jobs.organisationId, orgId), eq(jobs.id, jobId)))
     .run();

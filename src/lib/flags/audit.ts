@@ -21,9 +21,9 @@ export type AuditAction =
   | 'flag.assign'
   | 'audit.view';
 
-/** Append one entry to the audit log. */
+/** Append one entry to the audit log (on the connection or inside the caller's transaction). */
 export function recordAudit(
-  db: Db,
+  db: Pick<Db, 'insert'>,
   actor: StaffActor,
   action: AuditAction,
   flagId: string | null,

@@ -24,7 +24,7 @@ function flagRow(db: Db, flagId: string): typeof flags.$inferSelect {
   return row;
 }
 
-function touch(db: Db, flagId: string, set: Partial<typeof flags.$inferInsert> = {}): void {
+function touch(db: Pick<Db, 'update'>, flagId: string, set: Partial<typeof flags.$inferInsert> = {}): void {
   db.update(flags)
     .set({ ...set, updatedAt: new Date() })
     .where(eq(flags.id, flagId))
@@ -35,11 +35,14 @@ function touch(db: Db, flagId: string, set: Partial<typeof flags.$inferInsert> =
 export function addNote(db: Db, actor: StaffActor, flagId: string, body: string): string {
   flagRow(db, flagId);
   const id = newId('fmsg');
-  db.insert(flagMessages)
-    .values({ id, flagId, kind: 'note', authorUserId: actor.id, body, createdAt: new Date() })
-    .run();
-  touch(db, flagId);
-  recordAudit(db, actor, 'flag.note', flagId, { messageId: id });
+  // Message, flag stamp and audit entry land together or not at all (so in the other writers).
+  db.transaction((tx) => {
+    tx.insert(flagMessages)
+      .values({ id, flagId, kind: 'note', authorUserId: actor.id, body, createdAt: new Date() })
+      .run();
+    touch(tx, flagId);
+    recordAudit(tx, actor, 'flag.note', flagId, { messageId: id });
+  });
   return id;
 }
 
@@ -57,20 +60,22 @@ export async function addReply(
   const sent = await sendReplyEmail({ to: flag.reporterEmail, flagId, body });
   const emailStatus = sent ? 'sent' : 'failed';
   const id = newId('fmsg');
-  db.insert(flagMessages)
-    .values({
-      id,
-      flagId,
-      kind: 'reply',
-      authorUserId: actor.id,
-      body,
-      emailStatus,
-      createdAt: new Date(),
-    })
-    .run();
   const moveOn = sent && (flag.status === 'new' || flag.status === 'in_hand');
-  touch(db, flagId, moveOn ? { status: 'answered' } : {});
-  recordAudit(db, actor, 'flag.reply', flagId, { messageId: id, emailStatus });
+  db.transaction((tx) => {
+    tx.insert(flagMessages)
+      .values({
+        id,
+        flagId,
+        kind: 'reply',
+        authorUserId: actor.id,
+        body,
+        emailStatus,
+        createdAt: new Date(),
+      })
+      .run();
+    touch(tx, flagId, moveOn ? { status: 'answered' } : {});
+    recordAudit(tx, actor, 'flag.reply', flagId, { messageId: id, emailStatus });
+  });
   return { id, emailStatus };
 }
 
@@ -94,14 +99,16 @@ export function updateFlag(db: Db, actor: StaffActor, flagId: string, change: Fl
     set.assigneeUserId = change.assigneeUserId;
   }
   if (change.status !== undefined) set.status = change.status;
-  touch(db, flagId, set);
-  if (change.status !== undefined && change.status !== flag.status) {
-    recordAudit(db, actor, 'flag.status', flagId, { from: flag.status, to: change.status });
-  }
-  if (change.assigneeUserId !== undefined && change.assigneeUserId !== flag.assigneeUserId) {
-    recordAudit(db, actor, 'flag.assign', flagId, {
-      from: flag.assigneeUserId,
-      to: change.assigneeUserId,
-    });
-  }
+  db.transaction((tx) => {
+    touch(tx, flagId, set);
+    if (change.status !== undefined && change.status !== flag.status) {
+      recordAudit(tx, actor, 'flag.status', flagId, { from: flag.status, to: change.status });
+    }
+    if (change.assigneeUserId !== undefined && change.assigneeUserId !== flag.assigneeUserId) {
+      recordAudit(tx, actor, 'flag.assign', flagId, {
+        from: flag.assigneeUserId,
+        to: change.assigneeUserId,
+      });
+    }
+  });
 }
