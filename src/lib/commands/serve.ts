@@ -7,6 +7,7 @@ import http from 'node:http';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
+import { compress } from '../server/compression';
 import { securityHeaders } from '../server/security-headers';
 
 type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
@@ -39,7 +40,7 @@ async function main(): Promise<void> {
   const server = http.createServer((req, res) => {
     for (const [name, value] of headers) res.setHeader(name, value);
     closeIfBodyUnread(req, res);
-    handler(req, res);
+    compress(req, res, () => handler(req, res));
   });
   server.keepAliveTimeout = 5_000;
   server.listen(config.port, config.host, () => {
