@@ -16,11 +16,19 @@ export function lineFigures(r: LineResult | SiphonResult): Figure[] {
   ];
 }
 
+/**
+ * 1234567 → "1,234,567". Not toLocaleString: its first call loads the browser's number-format
+ * data, a long main-thread task on a slow phone just as the page becomes interactive.
+ */
+function groupThousands(n: number): string {
+  return String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+}
+
 /** Reynolds number, friction factor and regime, in words a crew can check. */
 export function FlowFacts({ r }: { r: LineResult | SiphonResult }): ReactElement {
   return (
     <p className="text-ink-soft" data-testid="flow-facts">
-      Reynolds number {Math.round(r.reynolds).toLocaleString('en')} ({r.regime}), friction factor{' '}
+      Reynolds number {groupThousands(Math.round(r.reynolds))} ({r.regime}), friction factor{' '}
       {r.friction_factor > 0 ? r.friction_factor.toFixed(4) : '—'}.
     </p>
   );
