@@ -83,6 +83,8 @@ export default function QuickCheck(): ReactElement {
         ) : (
           <>
             <section id="quick-result" ref={resultRef} aria-label="Result" className="min-w-0 scroll-mt-4 space-y-3">
+              {/* The outline needs a level-2 heading before the result's own h3s. */}
+              <h2 className="sr-only">Result</h2>
               <VerdictBanner verdict={answer.verdict} />
               <FigureList figures={answer.figures} system={system} />
               <Limits a={answer} system={system} />
