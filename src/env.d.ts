@@ -2,7 +2,11 @@
 
 declare namespace App {
   interface Locals {
-    /** Id of this request: taken from X-Request-Id when the caller sent one, else a new UUID. */
+    /**
+     * Id of this request: the caller's X-Request-Id when sane, else a new UUID (set by the server,
+     * src/lib/server/access-log.ts). Returned as X-Request-Id and logged as `reqId` on every line
+     * written while the request is handled, so a user's report can be matched to the logs.
+     */
     requestId: string;
     /**
      * The signed-in person, resolved once per request by the middleware from the database

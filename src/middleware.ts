@@ -11,6 +11,7 @@ import { requestIdFor } from './lib/server/request-id';
  */
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
+  // The production server has already set this header (src/lib/server/access-log.ts).
   context.locals.requestId = requestIdFor(context.request.headers.get('x-request-id'));
   context.locals.user = null;
   context.locals.organisation = null;

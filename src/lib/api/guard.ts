@@ -6,6 +6,8 @@
  */
 import type { APIContext, APIRoute } from 'astro';
 import { EngineInputError } from '../hydraulics/types';
+import { logger } from '../server/logger';
+import { logPath } from '../server/redact';
 import { withCors } from './cors';
 import { cannotCompute, invalidInput } from './errors';
 import { allFinite } from './finite-result';
@@ -22,8 +24,15 @@ export function clientKey(context: APIContext): string {
 }
 
 function logUnexpected(context: APIContext, error: unknown): void {
-  const id = context.locals?.requestId ?? '-';
-  console.error(`[api] ${context.request.method} ${context.url.pathname} request ${id}:`, error);
+  logger.error(
+    {
+      reqId: context.locals?.requestId,
+      err: error,
+      method: context.request.method,
+      path: logPath(context.url.pathname),
+    },
+    'api handler failed',
+  );
 }
 
 /** Wrap a handler: rate limit first, CORS always, and a JSON 422 instead of any thrown error. */

@@ -6,6 +6,7 @@ import { accounts, sessions, users, verificationTokens } from '../../../db/schem
 import { ensureAuthSecret } from '../commands/secret';
 import { getConfig } from '../config';
 import { getDb } from '../db/client';
+import { authLogger } from '../server/auth-logger';
 import { createPersonalOrganisation } from '../data/organisations';
 import { sendEmail, senderAddress } from '../email/send';
 import { signInEmail } from '../email/sign-in-email';
@@ -59,6 +60,8 @@ const config = defineConfig({
     }),
   ],
   pages: { signIn: '/signin', verifyRequest: '/signin/sent', error: '/signin' },
+  // One JSON line per auth error, no stack traces (src/lib/server/auth-logger.ts).
+  logger: authLogger,
   events: {
     async createUser({ user }) {
       if (user.id) createPersonalOrganisation(user.id, user.name || user.email || 'My workspace');

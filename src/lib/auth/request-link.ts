@@ -1,5 +1,6 @@
 import { Auth } from '@auth/core';
 import authConfig from './auth.config';
+import { logger } from '../server/logger';
 
 /** The outcome of asking Auth.js to e-mail a sign-in link. */
 export type LinkResult = { ok: true } | { ok: false; reason: string };
@@ -46,7 +47,7 @@ export async function requestSignInLink(email: string, next: string, origin: str
   const location = response.headers.get('location') ?? '';
   const error = location ? new URL(location, base).searchParams.get('error') : 'NoRedirect';
   if (!error && response.status >= 300 && response.status < 400) return { ok: true };
-  console.error(`sign-in link request failed: ${response.status} ${location}`);
+  logger.warn({ status: response.status, error }, 'sign-in link request failed');
   return { ok: false, reason: error === 'EmailSignin' ? 'The sign-in e-mail could not be sent.' : 'Sign-in failed.' };
 }
 

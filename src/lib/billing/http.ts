@@ -1,6 +1,7 @@
 import type { APIContext } from 'astro';
 import { BillingError } from './actions';
 import { BillingUnavailableError } from './stripe-client';
+import { logger } from '../server/logger';
 
 /**
  * The billing API answers two kinds of caller: scripts and islands sending JSON get JSON; plain
@@ -56,7 +57,7 @@ export async function billingRoute(
 function paymentsError(error: unknown): BillingError {
   const e = error as { type?: string; message?: string };
   if (typeof e?.type === 'string' && e.type.startsWith('Stripe')) {
-    console.error('payments service:', e.type, e.message);
+    logger.error({ err: error, stripeType: e.type }, 'payments service refused a request');
     return new BillingError(
       502,
       'payments_error',

@@ -7,7 +7,11 @@ import http from 'node:http';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
+import { trackRequest } from '../server/access-log';
 import { compress } from '../server/compression';
+import { routeConsoleToLogger } from '../server/console-bridge';
+import { logger } from '../server/logger';
+import { runWithRequestId } from '../server/request-context';
 import { securityHeaders } from '../server/security-headers';
 
 type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
@@ -32,19 +36,21 @@ function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerResponse):
 
 async function main(): Promise<void> {
   process.env.ASTRO_NODE_AUTOSTART = 'disabled';
+  routeConsoleToLogger();
   const config = getConfig();
   const entry = pathToFileURL(path.resolve('dist/server/entry.mjs')).href;
   const { handler } = (await import(entry)) as { handler: Handler };
   const headers = Object.entries(securityHeaders(config.production));
 
   const server = http.createServer((req, res) => {
+    const id = trackRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
     closeIfBodyUnread(req, res);
-    compress(req, res, () => handler(req, res));
+    compress(req, res, () => runWithRequestId(id, () => handler(req, res)));
   });
   server.keepAliveTimeout = 5_000;
   server.listen(config.port, config.host, () => {
-    console.log(`Server listening on http://${config.host}:${config.port}`);
+    logger.info({ host: config.host, port: config.port }, 'server listening');
   });
 
   let closing = false;
@@ -64,6 +70,6 @@ async function main(): Promise<void> {
 }
 
 main().catch((error: unknown) => {
-  console.error(`Server failed to start: ${error instanceof Error ? error.message : String(error)}`);
-  process.exit(1);
+  logger.fatal({ err: error }, 'server failed to start');
+  logger.flush(() => process.exit(1));
 });

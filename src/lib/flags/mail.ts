@@ -1,5 +1,6 @@
 import { getConfig } from '../config';
 import { sendEmail } from '../email/send';
+import { logger } from '../server/logger';
 import { REASON_LABELS } from './labels';
 import type { FlagReason } from './labels';
 
@@ -75,10 +76,8 @@ async function deliver(m: {
     await sendEmail({ to: m.to, subject: m.subject, text: m.text, html: htmlOf(m.text) });
     return true;
   } catch (err) {
-    console.error(
-      `flag e-mail "${m.tag}" to ${m.to} failed:`,
-      err instanceof Error ? err.message : err,
-    );
+    // No recipient address in the log: the tag says which notice failed.
+    logger.error({ err, tag: m.tag }, 'flag e-mail failed');
     return false;
   }
 }

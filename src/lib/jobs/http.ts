@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { logger } from '../server/logger';
 
 /** An endpoint answer that ends the request early. */
 export class HttpError extends Error {
@@ -58,7 +59,7 @@ export async function handle(run: () => Promise<Response> | Response): Promise<R
     return await run();
   } catch (e) {
     if (e instanceof HttpError) return Response.json(e.body, { status: e.status });
-    console.error('jobs endpoint failed', e);
+    logger.error({ err: e }, 'jobs endpoint failed');
     return Response.json({ error: 'server_error', message: 'Something went wrong; try again.' }, { status: 500 });
   }
 }

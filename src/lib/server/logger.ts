@@ -1,0 +1,75 @@
+/**
+ * The server's one logger: pino, JSON lines on stdout, level from LOG_LEVEL (default info).
+ * The custom server and Astro's built bundle each import this module, so the instance lives on
+ * globalThis and both write through one destination.
+ *
+ * What never reaches a line: request or response bodies, headers (so no cookie or
+ * Authorization), query strings, configured secrets, key-shaped strings. Errors are logged as
+ * their type and scrubbed message; the stack is added only at LOG_LEVEL=debug or trace, which
+ * is for reproducing a fault on one's own machine, never for production.
+ */
+import pino from 'pino';
+import type { Logger } from 'pino';
+import { REDACTED, scrub } from './redact';
+import { currentRequestId } from './request-context';
+
+export type { Logger };
+
+const LEVELS = ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'];
+
+function levelFromEnv(): string {
+  const raw = (process.env.LOG_LEVEL ?? '').trim().toLowerCase();
+  return LEVELS.includes(raw) ? raw : 'info';
+}
+
+/** Serialize an error as { type, message } (scrubbed); with the stack only when debugging. */
+export function errorFields(error: unknown, withStack = false): Record<string, string> {
+  if (!(error instanceof Error)) return { type: typeof error, message: scrub(String(error)) };
+  const fields: Record<string, string> = { type: error.name, message: scrub(error.message) };
+  if (withStack && error.stack) fields.stack = scrub(error.stack);
+  return fields;
+}
+
+function createLogger(): Logger {
+  const level = levelFromEnv();
+  const withStack = level === 'debug' || level === 'trace';
+  const serialize = (error: unknown): Record<string, string> => errorFields(error, withStack);
+  return pino({
+    level,
+    base: { service: 'drainwright', pid: process.pid },
+    timestamp: pino.stdTimeFunctions.isoTime,
+    formatters: { level: (label) => ({ level: label }) },
+    serializers: { err: serialize, cause: serialize },
+    // Lines written while a request is handled carry its id.
+    mixin: () => {
+      const reqId = currentRequestId();
+      return reqId ? { reqId } : {};
+    },
+    // Belt and braces for structured fields someone might add later.
+    redact: {
+      paths: [
+        'headers',
+        '*.headers',
+        'cookie',
+        '*.cookie',
+        'authorization',
+        '*.authorization',
+        'token',
+        '*.token',
+        'secret',
+        '*.secret',
+        'password',
+        '*.password',
+        'url',
+        '*.url',
+      ],
+      censor: REDACTED,
+    },
+  });
+}
+
+const KEY = Symbol.for('drainwright.logger');
+const store = globalThis as typeof globalThis & { [KEY]?: Logger };
+
+/** The process-wide logger. */
+export const logger: Logger = (store[KEY] ??= createLogger());
