@@ -1,11 +1,12 @@
 import type { APIRoute } from 'astro';
 import { getDb } from '../../lib/db/client';
-import { checkHealth } from '../../lib/health';
+import { healthReport } from '../../lib/health';
 
-export const GET: APIRoute = () => {
-  const health = checkHealth(getDb);
+/** 200 when every required check passes (status ok or degraded), else 503. */
+export const GET: APIRoute = async () => {
+  const health = await healthReport(getDb);
   return Response.json(health, {
-    status: health.status === 'ok' ? 200 : 503,
+    status: health.status === 'unavailable' ? 503 : 200,
     headers: { 'Cache-Control': 'no-store' },
   });
 };
