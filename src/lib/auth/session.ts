@@ -1,6 +1,7 @@
 import { and, eq, gt } from 'drizzle-orm';
 import type { AstroCookies } from 'astro';
 import { sessions, users } from '../../../db/schema';
+import { getConfig } from '../config';
 import { getDb } from '../db/client';
 import { membershipsForUser } from '../data/memberships';
 import type { Viewer } from './access';
@@ -10,6 +11,24 @@ export const SESSION_COOKIES = ['__Secure-authjs.session-token', 'authjs.session
 
 /** Cookie naming the organisation a user with several memberships is working in. */
 export const ORG_COOKIE = 'dw_org';
+
+/**
+ * How the org cookie is set: script cannot read it, other sites do not send it, and it is Secure
+ * in production even when TLS ends at a proxy and the request URL here is plain http (the same
+ * rule as the Auth.js cookies, see auth.config.ts).
+ */
+export function orgCookieOptions(url: URL): {
+  path: '/';
+  httpOnly: true;
+  sameSite: 'lax';
+  secure: boolean;
+} {
+  const secure =
+    getConfig().production ||
+    url.protocol === 'https:' ||
+    (process.env.PUBLIC_URL ?? '').startsWith('https:');
+  return { path: '/', httpOnly: true, sameSite: 'lax', secure };
+}
 
 export const SIGNED_OUT: Viewer = { user: null, organisation: null, role: null };
 
