@@ -6,7 +6,8 @@ import { linkBase } from './request-link';
 
 /** What an owner sends to invite someone. */
 export const InviteInput = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email()),
+  // 254: the longest address SMTP carries (RFC 5321), common practice for a length cap.
+  email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
   role: z.enum(['owner', 'member']).default('member'),
 });
 

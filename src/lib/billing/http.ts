@@ -14,8 +14,12 @@ export function isFormPost(request: Request): boolean {
 
 export async function readInput(request: Request): Promise<Record<string, unknown>> {
   if (request.method === 'GET') return {};
-  if (isFormPost(request)) return Object.fromEntries((await request.formData()).entries());
-  const text = await request.text();
+  const unreadable = (): never => {
+    throw new BillingError(400, 'invalid_body', 'The request body could not be read.');
+  };
+  if (isFormPost(request))
+    return Object.fromEntries((await request.formData().catch(unreadable)).entries());
+  const text = await request.text().catch(unreadable);
   if (!text) return {};
   try {
     const value: unknown = JSON.parse(text);

@@ -8,6 +8,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
 import { trackRequest } from '../server/access-log';
+import { refuseOversizedBody } from '../server/body-limit';
 import { compress } from '../server/compression';
 import { routeConsoleToLogger } from '../server/console-bridge';
 import { logger } from '../server/logger';
@@ -45,6 +46,7 @@ async function main(): Promise<void> {
   const server = http.createServer((req, res) => {
     const id = trackRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
+    if (refuseOversizedBody(req, res)) return;
     closeIfBodyUnread(req, res);
     compress(req, res, () => runWithRequestId(id, () => handler(req, res)));
   });

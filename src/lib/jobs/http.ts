@@ -26,7 +26,10 @@ export function notFound(what = 'job'): HttpError {
 
 /** zod issues as the API's { path, message } list. */
 export function zodIssues(error: z.ZodError): Issue[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join('.') || '(body)', message: i.message }));
+  return error.issues.map((i) => ({
+    path: i.path.map(String).join('.') || '(body)',
+    message: i.message,
+  }));
 }
 
 /** Parse a value with a zod schema or throw a 400 naming each bad field. */
@@ -44,8 +47,12 @@ export async function jsonBody(request: Request): Promise<unknown> {
   if (!/^application\/json\b/i.test(type)) {
     throw new HttpError(415, { error: 'unsupported_media_type', message: 'Send JSON.' });
   }
-  const text = await request.text();
-  if (text.length > MAX_BODY) throw new HttpError(413, { error: 'too_large', message: 'Body over 256 KiB.' });
+  // A read fails when the server's body cap cuts a chunked upload short (src/lib/server/body-limit.ts).
+  const text = await request.text().catch(() => {
+    throw new HttpError(413, { error: 'too_large', message: 'Body over 256 KiB.' });
+  });
+  if (text.length > MAX_BODY)
+    throw new HttpError(413, { error: 'too_large', message: 'Body over 256 KiB.' });
   try {
     return JSON.parse(text);
   } catch {
@@ -60,6 +67,9 @@ export async function handle(run: () => Promise<Response> | Response): Promise<R
   } catch (e) {
     if (e instanceof HttpError) return Response.json(e.body, { status: e.status });
     logger.error({ err: e }, 'jobs endpoint failed');
-    return Response.json({ error: 'server_error', message: 'Something went wrong; try again.' }, { status: 500 });
+    return Response.json(
+      { error: 'server_error', message: 'Something went wrong; try again.' },
+      { status: 500 },
+    );
   }
 }

@@ -1,0 +1,60 @@
+/**
+ * One request-body cap for the whole server, before any route buffers a byte: many endpoints
+ * read their body whole (request.json(), formData()), so without this a client could make the
+ * server hold hundreds of megabytes. Routes with a tighter cap of their own keep it (API v1 64 KiB,
+ * jobs 256 KiB, logo 2 MB); this is the ceiling above them.
+ */
+import type http from 'node:http';
+
+/** Ceiling for every route but the logo upload, bytes (a flag's snapshot is the largest, < 1 MB). */
+export const MAX_REQUEST_BYTES = 1024 * 1024;
+/** The logo upload: a 2 MB file plus room for the multipart wrapping (src/lib/brand/upload.ts). */
+export const MAX_UPLOAD_REQUEST_BYTES = 2 * 1024 * 1024 + 64 * 1024;
+/** A refused body up to this size is read and dropped, so the client sees the 413. */
+const DRAIN_MAX_BYTES = 16 * 1024 * 1024;
+
+/** The cap for a path; API v1 streams its body through its own 64 KiB cap and error shape. */
+export function bodyLimitFor(pathname: string): number {
+  if (pathname.startsWith('/api/v1/')) return Infinity;
+  return pathname === '/api/brand/logo' ? MAX_UPLOAD_REQUEST_BYTES : MAX_REQUEST_BYTES;
+}
+
+/**
+ * Enforce the cap: a declared Content-Length over it gets 413 at once (true = answered); a chunked
+ * body is handed to Astro through a counting iterable (the Node adapter reads `req.body` when set)
+ * that fails the read past the cap, so the route answers its own "unreadable body" 400.
+ */
+export function refuseOversizedBody(req: http.IncomingMessage, res: http.ServerResponse): boolean {
+  if (req.method === 'GET' || req.method === 'HEAD') return false;
+  const limit = bodyLimitFor(new URL(req.url ?? '/', 'http://localhost').pathname);
+  if (limit === Infinity) return false;
+  const declared = Number(req.headers['content-length']);
+  if (Number.isFinite(declared) && declared > limit) {
+    // Read and drop a moderate body so the client gets to read the 413 (closing while it still
+    // uploads would reset the connection); hang up on anything bigger.
+    const close = declared > DRAIN_MAX_BYTES;
+    if (!close) req.resume();
+    res.writeHead(413, {
+      'Content-Type': 'application/json; charset=utf-8',
+      ...(close ? { Connection: 'close' } : {}),
+    });
+    res.end(
+      JSON.stringify({
+        error: 'payload_too_large',
+        message: `The request body is over ${limit / 1024} KiB.`,
+      }),
+    );
+    return true;
+  }
+  if (req.headers['transfer-encoding']) (req as { body?: unknown }).body = capped(req, limit);
+  return false;
+}
+
+async function* capped(req: http.IncomingMessage, limit: number): AsyncGenerator<Buffer> {
+  let total = 0;
+  for await (const chunk of req as AsyncIterable<Buffer>) {
+    total += chunk.length;
+    if (total > limit) throw new Error(`request body over ${limit} bytes`);
+    yield chunk;
+  }
+}
