@@ -45,23 +45,19 @@ function createLogger(): Logger {
       const reqId = currentRequestId();
       return reqId ? { reqId } : {};
     },
-    // Belt and braces for structured fields someone might add later.
+    // Belt and braces for fields someone might add later. Top-level paths only: wildcard
+    // paths made every line about 2.5 times slower to write.
     redact: {
       paths: [
         'headers',
-        '*.headers',
         'cookie',
-        '*.cookie',
+        'cookies',
         'authorization',
-        '*.authorization',
         'token',
-        '*.token',
         'secret',
-        '*.secret',
         'password',
-        '*.password',
         'url',
-        '*.url',
+        'body',
       ],
       censor: REDACTED,
     },
