@@ -158,6 +158,51 @@ describe('API v1 over HTTP', () => {
   });
 });
 
+describe("API v1 on the server's short path", () => {
+  test('keeps a sane caller X-Request-Id and replaces anything else', async () => {
+    const body = JSON.stringify(siphonRequest);
+    const kept = await post('/api/v1/siphon', body, { ...json, 'x-request-id': 'crew-7_check' });
+    expect(kept.headers.get('x-request-id')).toBe('crew-7_check');
+    const replaced = await post('/api/v1/siphon', body, { ...json, 'x-request-id': '<bad id>' });
+    expect(replaced.headers.get('x-request-id')).toMatch(/^[0-9a-f-]{36}$/);
+  });
+
+  test('answers HEAD without a body, a trailing slash like the bare path, and 404 off the table', async () => {
+    const head = await fetch(`${app.url}/api/v1/catalog`, { method: 'HEAD' });
+    expect(head.status).toBe(200);
+    expect(await head.text()).toBe('');
+    const slash = await fetch(`${app.url}/api/v1/water/?temperature_c=20`);
+    expect(slash.status).toBe(200);
+    expect((await fetch(`${app.url}/api/v1/pumps`)).status).toBe(404);
+  });
+
+  test('names the configured public origin as the OpenAPI server, not the Host header', async () => {
+    const res = await fetch(`${app.url}/api/v1/openapi.json`, {
+      headers: { 'x-forwarded-host': 'attacker.example' },
+    });
+    const doc = (await res.json()) as { servers: { url: string }[] };
+    expect(doc.servers[0].url).toBe(new URL(app.url).origin);
+  });
+
+  test('answers 400 to a sender that stops halfway and never finishes the body', async () => {
+    const { request } = await import('node:http');
+    const url = new URL(`${app.url}/api/v1/siphon`);
+    const status = await new Promise<number>((resolve, reject) => {
+      const req = request(
+        { host: url.hostname, port: url.port, path: url.pathname, method: 'POST', headers: json },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode ?? 0);
+          req.destroy();
+        },
+      );
+      req.on('error', reject);
+      req.write('{"source_level_m": 2,'); // and nothing more: the 5 s body deadline must answer
+    });
+    expect(status).toBe(400);
+  }, 20_000);
+});
+
 describe('API v1 rate limit', () => {
   test('answers 429 with Retry-After past CALC_RATE_LIMIT_PER_MINUTE', async () => {
     const call = (): Promise<Response> =>

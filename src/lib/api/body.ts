@@ -3,6 +3,7 @@
  * enforced while they stream in (413, the rest is never buffered), then the nesting depth, and
  * only then JSON.parse (400 for anything that is not a JSON document).
  */
+import type { ApiAnswer, ApiRequest } from './answer';
 import { invalidBody, payloadTooLarge, unsupportedMediaType } from './errors';
 import { withinDepth } from './json-depth';
 
@@ -13,7 +14,7 @@ export const MAX_JSON_DEPTH = 20;
 /** A body still arriving after this long is refused, so a slow sender cannot hold a request. */
 export const BODY_DEADLINE_MS = 5_000;
 
-export type BodyResult = { ok: true; value: unknown } | { ok: false; response: Response };
+export type BodyResult = { ok: true; value: unknown } | { ok: false; answer: ApiAnswer };
 
 /** application/json or any application/…+json, in UTF-8 (the only charset JSON allows). */
 export function isJsonContentType(header: string | null): boolean {
@@ -23,42 +24,47 @@ export function isJsonContentType(header: string | null): boolean {
   return params.every((p) => !p.startsWith('charset=') || /^charset="?utf-8"?$/.test(p));
 }
 
-type Bytes = { ok: true; bytes: Uint8Array } | { ok: false; response: Response };
+const UNREAD: Record<'unreadable' | 'late', string> = {
+  unreadable: 'the body could not be read in full',
+  late: 'the body did not arrive in time',
+};
 
-async function readCapped(request: Request, limit: number): Promise<Bytes> {
-  const declared = Number(request.headers.get('content-length'));
-  if (Number.isFinite(declared) && declared > limit)
-    return { ok: false, response: payloadTooLarge(limit) };
-  if (!request.body) return { ok: true, bytes: new Uint8Array(0) };
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  let late = false;
-  const timer = setTimeout(() => {
-    late = true;
-    void reader.cancel().catch(() => {});
-  }, BODY_DEADLINE_MS);
-  try {
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      total += value.byteLength;
-      if (total > limit) {
-        void reader.cancel().catch(() => {});
-        return { ok: false, response: payloadTooLarge(limit) };
-      }
-      chunks.push(value);
-    }
-  } catch {
-    return { ok: false, response: invalidBody('the body could not be read in full') };
-  } finally {
-    clearTimeout(timer);
-  }
-  if (late) return { ok: false, response: invalidBody('the body did not arrive in time') };
-  return { ok: true, bytes: concat(chunks, total) };
+function refuse(answer: ApiAnswer): BodyResult {
+  return { ok: false, answer };
 }
 
-function concat(chunks: Uint8Array[], total: number): Uint8Array {
+/** Read and parse the request's JSON body, or the error answer to send instead. */
+export async function readJsonBody(request: ApiRequest): Promise<BodyResult> {
+  if (!isJsonContentType(request.header('content-type'))) return refuse(unsupportedMediaType());
+  const declared = Number(request.header('content-length'));
+  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) {
+    return refuse(payloadTooLarge(MAX_BODY_BYTES));
+  }
+  const read = await request.readBody(MAX_BODY_BYTES, BODY_DEADLINE_MS);
+  if (!read.ok) {
+    if (read.reason === 'too_large') return refuse(payloadTooLarge(MAX_BODY_BYTES));
+    return refuse(invalidBody(UNREAD[read.reason]));
+  }
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(read.bytes);
+  } catch {
+    return refuse(invalidBody('the body is not valid UTF-8'));
+  }
+  if (text.trim() === '') return refuse(invalidBody('the body is empty; send a JSON object'));
+  if (!withinDepth(text, MAX_JSON_DEPTH)) {
+    return refuse(invalidBody(`the body nests deeper than ${MAX_JSON_DEPTH} levels`));
+  }
+  try {
+    return { ok: true, value: JSON.parse(text) };
+  } catch (error) {
+    const why = error instanceof SyntaxError ? `: ${error.message.slice(0, 120)}` : '';
+    return refuse(invalidBody(`the body is not valid JSON${why}`));
+  }
+}
+
+/** Join body chunks into one array (no copy for a single chunk). */
+export function concatChunks(chunks: Uint8Array[], total: number): Uint8Array {
   if (chunks.length === 1) return chunks[0];
   const out = new Uint8Array(total);
   let at = 0;
@@ -67,33 +73,4 @@ function concat(chunks: Uint8Array[], total: number): Uint8Array {
     at += c.byteLength;
   }
   return out;
-}
-
-/** Read and parse the request's JSON body, or the error answer to send instead. */
-export async function readJsonBody(request: Request): Promise<BodyResult> {
-  if (!isJsonContentType(request.headers.get('content-type'))) {
-    return { ok: false, response: unsupportedMediaType() };
-  }
-  const read = await readCapped(request, MAX_BODY_BYTES);
-  if (!read.ok) return read;
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(read.bytes);
-  } catch {
-    return { ok: false, response: invalidBody('the body is not valid UTF-8') };
-  }
-  if (text.trim() === '')
-    return { ok: false, response: invalidBody('the body is empty; send a JSON object') };
-  if (!withinDepth(text, MAX_JSON_DEPTH)) {
-    return {
-      ok: false,
-      response: invalidBody(`the body nests deeper than ${MAX_JSON_DEPTH} levels`),
-    };
-  }
-  try {
-    return { ok: true, value: JSON.parse(text) };
-  } catch (error) {
-    const why = error instanceof SyntaxError ? `: ${error.message.slice(0, 120)}` : '';
-    return { ok: false, response: invalidBody(`the body is not valid JSON${why}`) };
-  }
 }

@@ -3,25 +3,24 @@
  * none carries a stack trace or internal detail.
  */
 import type { z } from 'zod';
+import type { ApiAnswer } from './answer';
+import { jsonAnswer } from './answer';
 import type { ApiErrorCode, ApiIssue } from './schemas-responses';
 import { issueAt, toApiIssues } from './issues';
 
 /** A JSON error answer. */
-export function errorResponse(
+export function errorAnswer(
   status: number,
   error: ApiErrorCode,
   issues: ApiIssue[],
   headers: Record<string, string> = {},
-): Response {
-  return Response.json(
-    { error, issues },
-    { status, headers: { 'Cache-Control': 'no-store', ...headers } },
-  );
+): ApiAnswer {
+  return jsonAnswer(status, { error, issues }, { 'Cache-Control': 'no-store', ...headers });
 }
 
 /** 400: the request is not an input the API can compute with. */
-export function invalidInput(issues: ApiIssue[]): Response {
-  return errorResponse(400, 'invalid_input', issues);
+export function invalidInput(issues: ApiIssue[]): ApiAnswer {
+  return errorAnswer(400, 'invalid_input', issues);
 }
 
 /** Body of the 400 answer for a request that failed its zod schema. */
@@ -33,13 +32,13 @@ export function invalidInputBody(
 }
 
 /** 400 for a problem with the body as a whole (not JSON, too deep, empty). */
-export function invalidBody(message: string): Response {
+export function invalidBody(message: string): ApiAnswer {
   return invalidInput([issueAt('', message)]);
 }
 
-export function methodNotAllowed(allowed: readonly string[]): Response {
+export function methodNotAllowed(allowed: readonly string[]): ApiAnswer {
   const allow = [...allowed, 'OPTIONS'].join(', ');
-  return errorResponse(
+  return errorAnswer(
     405,
     'method_not_allowed',
     [issueAt('', `this address answers ${allow} only`)],
@@ -47,20 +46,20 @@ export function methodNotAllowed(allowed: readonly string[]): Response {
   );
 }
 
-export function payloadTooLarge(limitBytes: number): Response {
-  return errorResponse(413, 'payload_too_large', [
+export function payloadTooLarge(limitBytes: number): ApiAnswer {
+  return errorAnswer(413, 'payload_too_large', [
     issueAt('', `the body is larger than ${limitBytes / 1024} KiB`),
   ]);
 }
 
-export function unsupportedMediaType(): Response {
-  return errorResponse(415, 'unsupported_media_type', [
+export function unsupportedMediaType(): ApiAnswer {
+  return errorAnswer(415, 'unsupported_media_type', [
     issueAt('', 'send the body as JSON with Content-Type: application/json (UTF-8)'),
   ]);
 }
 
-export function rateLimited(retryAfterS: number): Response {
-  return errorResponse(
+export function rateLimited(retryAfterS: number): ApiAnswer {
+  return errorAnswer(
     429,
     'rate_limited',
     [issueAt('', `too many requests from this address; try again in ${retryAfterS} s`)],
@@ -72,9 +71,9 @@ export function rateLimited(retryAfterS: number): Response {
  * 422: the input passed every check but the engine produced no usable answer (an engine bug or a
  * case it cannot represent). Logged server-side with the request id; no detail leaves the server.
  */
-export function cannotCompute(requestId?: string): Response {
+export function cannotCompute(requestId?: string): ApiAnswer {
   const ref = requestId ? ` (request ${requestId})` : '';
-  return errorResponse(422, 'cannot_compute', [
+  return errorAnswer(422, 'cannot_compute', [
     issueAt(
       '',
       `the engine could not compute a result for this input${ref}; check the input or report it`,

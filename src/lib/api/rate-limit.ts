@@ -5,6 +5,7 @@
  */
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 import { intFromEnv } from '../config';
+import type { ApiAnswer } from './answer';
 import { rateLimited } from './errors';
 
 export const DEFAULT_RATE_LIMIT_PER_MINUTE = 120;
@@ -25,7 +26,7 @@ function limiterFor(points: number): RateLimiterMemory {
 }
 
 /** Count one request from this client; the 429 answer when it is over the limit, else null. */
-export async function checkRateLimit(clientKey: string): Promise<Response | null> {
+export async function checkRateLimit(clientKey: string): Promise<ApiAnswer | null> {
   const points = rateLimitPerMinute();
   if (points === 0) return null;
   try {

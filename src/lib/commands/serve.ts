@@ -8,6 +8,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
 import { trackRequest } from '../server/access-log';
+import { serveApiV1 } from '../server/api-fast-path';
 import { refuseOversizedBody } from '../server/body-limit';
 import { compress } from '../server/compression';
 import { routeConsoleToLogger } from '../server/console-bridge';
@@ -48,6 +49,8 @@ async function main(): Promise<void> {
     for (const [name, value] of headers) res.setHeader(name, value);
     if (refuseOversizedBody(req, res)) return;
     closeIfBodyUnread(req, res);
+    // The API's small JSON answers skip compression (and log their request id themselves).
+    if (serveApiV1(req, res)) return;
     compress(req, res, () => runWithRequestId(id, () => handler(req, res)));
   });
   server.keepAliveTimeout = 5_000;

@@ -1,13 +1,10 @@
 /** GET /api/v1/catalog — materials, fittings and sizes with their sources (API v1). */
-import type { APIRoute } from 'astro';
-import { catalogAnswer } from '../../../lib/api/catalog-view';
-import { guarded } from '../../../lib/api/guard';
-import { methodNotAllowedRoute, preflightRoute } from '../../../lib/api/method-routes';
+import { v1Route } from '../../../lib/api/v1-routes';
+import { astroRoute } from '../../../lib/api/web-request';
 
-export const GET: APIRoute = guarded(() =>
-  Response.json(catalogAnswer(), { headers: { 'Cache-Control': 'public, max-age=300' } }),
-);
+const route = v1Route('/api/v1/catalog');
 
+export const GET = astroRoute(route.GET);
 export const HEAD = GET;
-export const OPTIONS = preflightRoute(['GET', 'HEAD']);
-export const ALL = methodNotAllowedRoute(['GET', 'HEAD']);
+export const OPTIONS = astroRoute(route.OPTIONS);
+export const ALL = astroRoute(route.ALL);

@@ -1,21 +1,9 @@
 /** POST /api/v1/drain — drain-down of a vessel: time and level curve (API v1). */
-import type { APIRoute } from 'astro';
-import { solveDrain } from '../../../lib/hydraulics';
-import { readJsonBody } from '../../../lib/api/body';
-import { invalidInputBody } from '../../../lib/api/errors';
-import { answer, guarded } from '../../../lib/api/guard';
-import { methodNotAllowedRoute, preflightRoute } from '../../../lib/api/method-routes';
-import { drainRequestSchema } from '../../../lib/api/schemas-drain';
+import { v1Route } from '../../../lib/api/v1-routes';
+import { astroRoute } from '../../../lib/api/web-request';
 
-export const POST: APIRoute = guarded(async (context) => {
-  const body = await readJsonBody(context.request);
-  if (!body.ok) return body.response;
-  const parsed = drainRequestSchema.safeParse(body.value);
-  if (!parsed.success) {
-    return Response.json(invalidInputBody(parsed.error, body.value), { status: 400 });
-  }
-  return answer(context, () => solveDrain(parsed.data));
-});
+const route = v1Route('/api/v1/drain');
 
-export const OPTIONS = preflightRoute(['POST']);
-export const ALL = methodNotAllowedRoute(['POST']);
+export const POST = astroRoute(route.POST);
+export const OPTIONS = astroRoute(route.OPTIONS);
+export const ALL = astroRoute(route.ALL);

@@ -1,21 +1,9 @@
 /** POST /api/v1/line — gravity line: steady flow and losses (API v1). */
-import type { APIRoute } from 'astro';
-import { solveLine } from '../../../lib/hydraulics';
-import { readJsonBody } from '../../../lib/api/body';
-import { invalidInputBody } from '../../../lib/api/errors';
-import { answer, guarded } from '../../../lib/api/guard';
-import { methodNotAllowedRoute, preflightRoute } from '../../../lib/api/method-routes';
-import { lineRequestSchema } from '../../../lib/api/schemas-requests';
+import { v1Route } from '../../../lib/api/v1-routes';
+import { astroRoute } from '../../../lib/api/web-request';
 
-export const POST: APIRoute = guarded(async (context) => {
-  const body = await readJsonBody(context.request);
-  if (!body.ok) return body.response;
-  const parsed = lineRequestSchema.safeParse(body.value);
-  if (!parsed.success) {
-    return Response.json(invalidInputBody(parsed.error, body.value), { status: 400 });
-  }
-  return answer(context, () => solveLine(parsed.data));
-});
+const route = v1Route('/api/v1/line');
 
-export const OPTIONS = preflightRoute(['POST']);
-export const ALL = methodNotAllowedRoute(['POST']);
+export const POST = astroRoute(route.POST);
+export const OPTIONS = astroRoute(route.OPTIONS);
+export const ALL = astroRoute(route.ALL);

@@ -1,25 +1,10 @@
 /** GET /api/v1/water?temperature_c=T&altitude_m=z — water properties and air pressure (API v1). */
-import type { APIRoute } from 'astro';
-import { invalidInputBody } from '../../../lib/api/errors';
-import { answer, guarded } from '../../../lib/api/guard';
-import { issueAt } from '../../../lib/api/issues';
-import { methodNotAllowedRoute, preflightRoute } from '../../../lib/api/method-routes';
-import { waterQuerySchema } from '../../../lib/api/schemas-requests';
-import { queryObject, waterAnswer } from '../../../lib/api/water-view';
+import { v1Route } from '../../../lib/api/v1-routes';
+import { astroRoute } from '../../../lib/api/web-request';
 
-export const GET: APIRoute = guarded((context) => {
-  const query = queryObject(context.url.searchParams);
-  if (query.repeated) {
-    const issues = [issueAt(query.repeated, 'is given more than once')];
-    return Response.json({ error: 'invalid_input', issues }, { status: 400 });
-  }
-  const parsed = waterQuerySchema.safeParse(query.value);
-  if (!parsed.success) {
-    return Response.json(invalidInputBody(parsed.error, query.value), { status: 400 });
-  }
-  return answer(context, () => waterAnswer(parsed.data.temperature_c, parsed.data.altitude_m));
-});
+const route = v1Route('/api/v1/water');
 
+export const GET = astroRoute(route.GET);
 export const HEAD = GET;
-export const OPTIONS = preflightRoute(['GET', 'HEAD']);
-export const ALL = methodNotAllowedRoute(['GET', 'HEAD']);
+export const OPTIONS = astroRoute(route.OPTIONS);
+export const ALL = astroRoute(route.ALL);
