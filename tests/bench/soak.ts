@@ -3,7 +3,8 @@
  * built app on a temp DATA_DIR, warms it up, then loads it with autocannon (50 connections, 60 s)
  * with a mix of public pages, calculation API calls and signed-in job reads and writes. Prints
  * requests/s, p50, p99, errors and the server process's resident memory (from /proc of the
- * server, not of this script) before and after. Goals: zero errors, RSS growth under 20 %.
+ * server, not of this script) before and after, each read after the same idle pause, plus the
+ * reading the moment the load stops. Goals: zero errors, RSS growth under 20 %.
  * SOAK_SECONDS, SOAK_CONNECTIONS and SOAK_WARMUP_SECONDS override the defaults.
  */
 import autocannon from 'autocannon';
@@ -20,6 +21,8 @@ const PORT = 48600;
 const SECONDS = Number(process.env.SOAK_SECONDS) || 60;
 const CONNECTIONS = Number(process.env.SOAK_CONNECTIONS) || 50;
 const WARMUP = Number(process.env.SOAK_WARMUP_SECONDS) || 10;
+/** Idle seconds before each memory reading, so both are taken on the same (quiet) footing. */
+const SETTLE = 15;
 const GOAL_GROWTH = 0.2;
 
 /**
@@ -153,19 +156,34 @@ function build(): void {
   }
 }
 
-function report(
-  r: autocannon.Result,
-  rss: { cold: number; before: number; after: number },
-): boolean {
+interface Memory {
+  cold: number;
+  /** Idle, SETTLE s after the warm-up load stopped. */
+  before: number;
+  /** The moment the soak load stopped. */
+  end: number;
+  /** Idle, SETTLE s after the soak load stopped (same footing as `before`). */
+  after: number;
+  /** Sampled every 10 s while loaded. */
+  trend: number[];
+}
+
+function printMemory(m: Memory, pid: number): number {
+  const pct = (x: number): string => `${(((x - m.before) / m.before) * 100).toFixed(1)} %`;
+  const mib = (x: number): string => `${x.toFixed(1)} MiB`;
+  console.log(`server RSS (pid ${pid}, /proc/${pid}/status VmRSS):`);
+  console.log(`  cold ${mib(m.cold)}; before (idle ${SETTLE} s after warm-up) ${mib(m.before)}`);
+  console.log(`  at the end of the load ${mib(m.end)} (${pct(m.end)})`);
+  console.log(`  after (idle ${SETTLE} s after the soak) ${mib(m.after)} (${pct(m.after)})`);
+  console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB`);
+  return (m.after - m.before) / m.before;
+}
+
+function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
   const errors = r.errors + r.timeouts + r.non2xx;
-  const growth = (rss.after - rss.before) / rss.before;
-  const load = os.loadavg().map((l) => l.toFixed(2));
+  const limits = Object.entries(SOAK_ENV).map(([k, v]) => `${k}=${v}`);
   console.log(`\nsoak: ${CONNECTIONS} connections, ${SECONDS} s, after a ${WARMUP} s warm-up`);
-  console.log(
-    `limits: ${Object.entries(SOAK_ENV)
-      .map(([k, v]) => `${k}=${v}`)
-      .join(' ')} (calculation API limiter off)`,
-  );
+  console.log(`limits: ${limits.join(' ')} (calculation API limiter off)`);
   console.log(`requests   ${r.requests.total} total, ${r.requests.average.toFixed(0)} req/s`);
   console.log(
     `latency    p50 ${r.latency.p50} ms   p99 ${r.latency.p99} ms   max ${r.latency.max} ms`,
@@ -175,14 +193,15 @@ function report(
   );
   for (const [kind, t] of tally)
     console.log(`  ${kind.padEnd(34)} ${String(t.n).padStart(7)}  bad ${t.bad}`);
-  console.log(
-    `server RSS cold ${rss.cold.toFixed(1)} MiB, before ${rss.before.toFixed(1)} MiB, after ${rss.after.toFixed(1)} MiB (${(growth * 100).toFixed(1)} %)`,
-  );
+  const growth = printMemory(memory, pid);
+  const load = os.loadavg().map((l) => l.toFixed(2));
   console.log(`load avg   ${load.join(' ')} (1, 5, 15 min) on ${os.cpus().length} cores`);
   const ok = errors === 0 && growth < GOAL_GROWTH;
   console.log(`goals (0 errors, RSS growth < ${GOAL_GROWTH * 100} %): ${ok ? 'met' : 'NOT met'}`);
   return ok;
 }
+
+const idle = (seconds: number): Promise<void> => new Promise((r) => setTimeout(r, seconds * 1000));
 
 async function main(): Promise<void> {
   build();
@@ -193,10 +212,17 @@ async function main(): Promise<void> {
     const cold = rssMiB(pid);
     await run(app.url, cookie, WARMUP);
     tally.clear();
+    await idle(SETTLE);
     const before = rssMiB(pid);
+    // A trend, not just two points: a leak climbs steadily, a busy heap saws up and down.
+    const trend: number[] = [];
+    const sampler = setInterval(() => trend.push(rssMiB(pid)), 10_000);
     const result = await run(app.url, cookie, SECONDS);
-    const after = rssMiB(pid);
-    process.exitCode = report(result, { cold, before, after }) ? 0 : 1;
+    clearInterval(sampler);
+    const end = rssMiB(pid);
+    await idle(SETTLE);
+    const memory = { cold, before, end, after: rssMiB(pid), trend };
+    process.exitCode = report(result, memory, pid) ? 0 : 1;
   } finally {
     await app.stop();
     fs.rmSync(app.dataDir, { recursive: true, force: true });
