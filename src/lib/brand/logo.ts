@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import sharp from 'sharp';
+import type { OutputInfo } from 'sharp';
 import { getConfig } from '../config';
 
 export const MAX_LOGO_BYTES = 2 * 1024 * 1024;
@@ -55,7 +56,7 @@ export async function storeLogo(buf: Buffer): Promise<StoredLogo> {
   if (looksLikeSvg(buf)) throw new LogoError(415, 'SVG logos are not accepted: upload PNG, JPEG or WebP.');
   const kind = sniffImage(buf);
   if (!kind) throw new LogoError(415, 'The file is not a PNG, JPEG or WebP image.');
-  let out: { data: Buffer; info: sharp.OutputInfo };
+  let out: { data: Buffer; info: OutputInfo };
   try {
     const img = sharp(buf, { failOn: 'error', limitInputPixels: 40_000_000 });
     const meta = await img.metadata();
