@@ -4,6 +4,17 @@ import type { Decision } from './access';
 import { ORG_COOKIE, SIGNED_OUT, resolveViewer, sessionToken } from './session';
 
 const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+/** The Auth.js actions under /api/auth/; it answers any other with a bare 500. */
+const AUTH_ACTIONS = new Set([
+  'providers',
+  'session',
+  'csrf',
+  'signin',
+  'signout',
+  'callback',
+  'verify-request',
+  'error',
+]);
 
 /**
  * Everything the middleware decides about a request before a route runs: resolve who is asking
@@ -20,6 +31,9 @@ export function guard(context: APIContext): Response | null {
   // Sign-in e-mails are only requested through /signin, which rate-limits them.
   if (context.request.method === 'POST' && pathname.startsWith('/api/auth/signin')) {
     return refuse('forbidden', true, context);
+  }
+  if (pathname.startsWith('/api/auth/') && !AUTH_ACTIONS.has(pathname.split('/')[3] ?? '')) {
+    return Response.json({ error: 'not_found' }, { status: 404 });
   }
   const viewer = needsViewer(rule)
     ? resolveViewer(sessionToken(context.cookies), context.cookies.get(ORG_COOKIE)?.value ?? null)
@@ -75,5 +89,8 @@ function forbiddenPage(): Response {
 <h1>This page is not open to your account</h1>
 <p>Your role in this organisation does not include it. Ask the account owner if you need it.</p>
 <p><a href="/app">Back to your Drainwright</a></p></body></html>`;
-  return new Response(html, { status: 403, headers: { 'Content-Type': 'text/html; charset=utf-8' } });
+  return new Response(html, {
+    status: 403,
+    headers: { 'Content-Type': 'text/html; charset=utf-8' },
+  });
 }
