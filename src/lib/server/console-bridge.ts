@@ -23,6 +23,7 @@ function textOf(args: unknown[], withStack: boolean): string {
 
 type Level = 'error' | 'warn' | 'info' | 'debug';
 
+/** Install the console routing and the fatal-error line; call once, first thing in the server. */
 export function routeConsoleToLogger(): void {
   const withStack = logger.isLevelEnabled('debug');
   const send =
@@ -37,4 +38,9 @@ export function routeConsoleToLogger(): void {
   console.info = send('info');
   console.log = send('info');
   console.debug = send('debug');
+  // Node would print the stack to stderr itself; exit the same way, as one fatal line.
+  process.on('uncaughtException', (error) => {
+    logger.fatal({ err: error }, 'uncaught exception');
+    process.exit(1);
+  });
 }

@@ -13,7 +13,7 @@ const SECRET_ENV = [
 ] as const;
 
 const CREDENTIAL_PARAM =
-  /([?&;](?:token|code|secret|key|signature|password|email|csrfToken)=)[^&#\s"']*/gi;
+  /(^|[?&;\s,(])((?:token|code|secret|key|signature|password|email|csrfToken)=)[^&#\s"',)]*/gi;
 const BEARER = /\b(Bearer|Basic)\s+[\w~+/.=-]+/gi;
 const KEY_SHAPED = /\b(sk|rk|pk)_(live|test)_[\w]+|\bwhsec_[\w]+|\bre_[\w]{8,}/g;
 
@@ -26,7 +26,7 @@ function configuredSecrets(): string[] {
 /** `text` with every credential we can recognise replaced by [redacted]. */
 export function scrub(text: string): string {
   let out = text
-    .replace(CREDENTIAL_PARAM, `$1${REDACTED}`)
+    .replace(CREDENTIAL_PARAM, `$1$2${REDACTED}`)
     .replace(BEARER, `$1 ${REDACTED}`)
     .replace(KEY_SHAPED, REDACTED);
   for (const secret of configuredSecrets()) out = out.split(secret).join(REDACTED);

@@ -29,6 +29,14 @@ describe('scrub', () => {
   });
 });
 
+describe('scrub in free text', () => {
+  test('does remove a credential written as name=value outside a URL', () => {
+    expect(scrub('failed with token=abc123, retrying')).toBe(
+      'failed with token=[redacted], retrying',
+    );
+  });
+});
+
 describe('logPath', () => {
   test('does drop the query string entirely', () => {
     expect(logPath('/api/auth/callback/resend?token=abc&email=x')).toBe(
