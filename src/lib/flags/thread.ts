@@ -24,7 +24,11 @@ function flagRow(db: Db, flagId: string): typeof flags.$inferSelect {
   return row;
 }
 
-function touch(db: Pick<Db, 'update'>, flagId: string, set: Partial<typeof flags.$inferInsert> = {}): void {
+function touch(
+  db: Pick<Db, 'update'>,
+  flagId: string,
+  set: Partial<typeof flags.$inferInsert> = {},
+): void {
   db.update(flags)
     .set({ ...set, updatedAt: new Date() })
     .where(eq(flags.id, flagId))
