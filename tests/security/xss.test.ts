@@ -9,7 +9,7 @@
 import Papa from 'papaparse';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, phoneContext } from '../helpers/browser';
 import { inbox } from '../support/helpers';
 import { CREW, OWNER, SUPPORT, hydrated, signIn, startSecApp, watchPage } from './helpers';
@@ -31,17 +31,11 @@ afterAll(async () => {
   await sec?.stop();
 });
 
-/** Open a page as a user and check that no payload became markup; returns the page's text. */
-async function probe(who: string | null, path: string): Promise<string> {
-  const context = await phoneContext(browser, sec.app.url);
-  if (who) await signIn(context, sec, who);
-  const page = await context.newPage();
-  const watch = await watchPage(page);
-  const res = await page.goto(path);
-  expect(res?.status(), path).toBe(200);
-  await hydrated(page);
-  await page.waitForLoadState('networkidle');
-  const found = await page.evaluate(() => ({
+/** What hostile text would leave in the DOM if it became markup. */
+function scan(
+  page: Page,
+): Promise<{ injected: number; jsLinks: number; handlers: number; text: string }> {
+  return page.evaluate(() => ({
     injected: document.querySelectorAll('[data-pwned], img[src="x"], img[src$="/x"]').length,
     jsLinks: [...document.querySelectorAll('[href], [src], [action]')].filter((e) =>
       /^\s*javascript:/i.test(
@@ -53,6 +47,19 @@ async function probe(who: string | null, path: string): Promise<string> {
     ).length,
     text: document.body.innerText,
   }));
+}
+
+/** Open a page as a user and check that no payload became markup; returns the page's text. */
+async function probe(who: string | null, path: string): Promise<string> {
+  const context = await phoneContext(browser, sec.app.url);
+  if (who) await signIn(context, sec, who);
+  const page = await context.newPage();
+  const watch = await watchPage(page);
+  const res = await page.goto(path);
+  expect(res?.status(), path).toBe(200);
+  await hydrated(page);
+  await page.waitForLoadState('networkidle');
+  const found = await scan(page);
   expect(found.injected, `${path}: injected element`).toBe(0);
   expect(found.jsLinks, `${path}: javascript: link`).toBe(0);
   expect(found.handlers, `${path}: event-handler attribute`).toBe(0);
@@ -82,6 +89,20 @@ describe('hostile text in pages', () => {
     },
     60_000,
   );
+
+  test('does notice markup when it is there (the scan can fail)', async () => {
+    const page = await (await phoneContext(browser, sec.app.url)).newPage();
+    await page.goto('/check');
+    await page.evaluate(
+      (html) => document.body.insertAdjacentHTML('beforeend', html),
+      `${PAYLOAD}<a href="javascript:void 0">x</a>`,
+    );
+    const found = await scan(page);
+    expect(found.injected).toBeGreaterThanOrEqual(2);
+    expect(found.handlers).toBeGreaterThanOrEqual(1);
+    expect(found.jsLinks).toBe(1);
+    await page.context().close();
+  });
 
   test('does keep the data intact: same text back from the API, the jobs table still there', async () => {
     const r = await fetch(`${sec.app.url}/api/jobs/${planted.jobId}`, { headers: sec.as(OWNER) });
