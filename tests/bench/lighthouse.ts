@@ -18,6 +18,8 @@ export interface LighthouseSummary extends LighthouseScores {
   /** The CPU slowdown used and the host's Lighthouse benchmarkIndex of the last run. */
   cpuMultiplier: number;
   benchmarkIndex: number;
+  /** Runs that gave no score (Lighthouse's error code), left out of the median and best. */
+  failed: string[];
 }
 
 /**
@@ -31,7 +33,7 @@ export function calibratedMultiplier(benchmarkIndex: number): number {
   return Math.min(4, Math.max(1, Math.round((benchmarkIndex / 440) * 10) / 10));
 }
 
-type Run = LighthouseScores & { tbtMs: number; cls: number };
+type Run = LighthouseScores & { tbtMs: number; cls: number; failed?: string };
 
 /** A Lighthouse runner on one Debian chromium; close it when done. */
 export interface LighthouseRunner {
@@ -64,6 +66,16 @@ export async function openLighthouse(calibrate = false): Promise<LighthouseRunne
     );
     benchmarkIndex = result?.lhr.environment.benchmarkIndex ?? 0;
     const categories = result?.lhr.categories;
+    // A run that timed out or never painted has null scores: counted as failed, not as a 0.
+    if (typeof categories?.performance?.score !== 'number') {
+      return {
+        failed: result?.lhr.runtimeError?.code ?? 'no score',
+        perf: 0,
+        a11y: 0,
+        tbtMs: 0,
+        cls: 0,
+      };
+    }
     const audits = result?.lhr.audits;
     return {
       perf: Math.round((categories?.performance?.score ?? 0) * 100),
@@ -77,7 +89,14 @@ export async function openLighthouse(calibrate = false): Promise<LighthouseRunne
     if (calibrate) await once(url);
     const multiplier = calibrate ? calibratedMultiplier(benchmarkIndex) : 4;
     const all: Run[] = [];
-    for (let i = 0; i < runs; i++) all.push(await once(url, multiplier));
+    const failed: string[] = [];
+    for (let i = 0; i < runs; i++) {
+      const run = await once(url, multiplier);
+      if (run.failed) failed.push(run.failed);
+      else all.push(run);
+    }
+    if (all.length === 0)
+      throw new Error(`every Lighthouse run of ${url} failed: ${failed.join(', ')}`);
     const mid = [...all].sort((a, b) => a.perf - b.perf)[Math.floor(all.length / 2)];
     return {
       perf: median(all.map((s) => s.perf)),
@@ -89,6 +108,7 @@ export async function openLighthouse(calibrate = false): Promise<LighthouseRunne
       cls: mid.cls,
       cpuMultiplier: multiplier,
       benchmarkIndex,
+      failed,
     };
   };
   return { scores, close: () => chrome.kill() };

@@ -124,7 +124,9 @@ function printTable(rows: Row[]): void {
     `${r.jsKb.toFixed(1)} (${r.scripts})${mark(r.jsKb <= GOALS.jsKb)}`,
     `${r.axe.length}${mark(r.axe.length === 0)}`,
     `${r.consoleErrors.length}${mark(r.consoleErrors.length === 0)}`,
-    r.lh ? `${r.lh.perf} (${r.lh.perfBest})${mark(r.lh.perf >= GOALS.lighthouse)}` : '–',
+    r.lh
+      ? `${r.lh.perf} (${r.lh.perfBest})${mark(r.lh.perf >= GOALS.lighthouse)}${r.lh.failed.length ? ` ${r.lh.failed.length} failed` : ''}`
+      : '–',
     r.lh ? `${r.lh.a11y} (${r.lh.a11yBest})${mark(r.lh.a11y >= GOALS.lighthouse)}` : '–',
     r.lh ? String(r.lh.tbtMs) : '–',
     r.lh ? r.lh.cls.toFixed(3) : '–',
@@ -167,7 +169,10 @@ async function main(): Promise<void> {
         for (const row of rows) {
           if (row.status !== 200) continue;
           row.lh = await lh.scores(base + row.page, LH_RUNS);
-          const runs = row.lh.runs.map((s) => `${s.perf}/${s.a11y}`).join(' ');
+          const runs = [
+            ...row.lh.runs.map((s) => `${s.perf}/${s.a11y}`),
+            ...row.lh.failed.map((f) => `failed (${f})`),
+          ].join(' ');
           const cpu = `cpu ${row.lh.cpuMultiplier}x, benchmarkIndex ${row.lh.benchmarkIndex}`;
           console.error(`lighthouse ${row.page}: ${runs} (${cpu}, load ${loadNote()})`);
         }
