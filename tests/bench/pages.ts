@@ -144,9 +144,10 @@ function printTable(rows: Row[]): void {
     `Lighthouse mobile ≥ ${GOALS.lighthouse}: median of ${LH_RUNS} runs (best in brackets); TBT and CLS of`,
   );
   console.log(`the median run. ✗ marks a miss. JS column: KB (script count). Load: ${loadNote()}.`);
-  const cpu = rows.find((r) => r.lh)?.lh;
-  if (cpu)
-    console.log(`CPU slowdown ${cpu.cpuMultiplier}x; host benchmarkIndex ${cpu.benchmarkIndex}.`);
+  const cpu = rows
+    .filter((r) => r.lh)
+    .map((r) => `${r.page} ${r.lh!.cpuMultiplier}x (index ${r.lh!.benchmarkIndex})`);
+  if (cpu.length) console.log(`CPU slowdown and host benchmarkIndex: ${cpu.join(', ')}.`);
   for (const r of rows) {
     for (const a of r.axe) console.log(`  axe ${r.page}: ${a}`);
     for (const e of r.consoleErrors) console.log(`  console ${r.page}: ${e.slice(0, 200)}`);
