@@ -108,7 +108,7 @@ function mix(cookie: string, origin: string): Req[] {
   ];
 }
 
-/** The `node … serve.ts` process in the app's process group (the one answering requests). */
+/** The `node dist/serve.mjs` process in the app's process group (the one answering requests). */
 function serverPid(group: number): number {
   for (const entry of fs.readdirSync('/proc')) {
     if (!/^\d+$/.test(entry)) continue;
@@ -116,7 +116,8 @@ function serverPid(group: number): number {
       const cmd = fs.readFileSync(`/proc/${entry}/cmdline`, 'utf8');
       const stat = fs.readFileSync(`/proc/${entry}/stat`, 'utf8');
       const pgrp = Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[2]);
-      if (pgrp === group && cmd.includes('commands/serve.ts')) return Number(entry);
+      if (pgrp === group && (cmd.includes('dist/serve.mjs') || cmd.includes('commands/serve.ts')))
+        return Number(entry);
     } catch {
       // the process ended while we looked
     }

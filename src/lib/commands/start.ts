@@ -13,6 +13,7 @@ import { openDatabase } from '../db/client';
 import { prepareDatabase } from '../db/setup';
 import { buildIsStale } from './build-check';
 import { ensureAuthSecret } from './secret';
+import { bundleServer } from './server-bundle';
 import { serviceEnv } from './service-env';
 
 const root = process.cwd();
@@ -41,10 +42,12 @@ async function main(): Promise<void> {
 
   if (!dev && buildIsStale(root)) {
     console.log('Building Drainwright (sources changed since the last build)…');
-    const code = await supervise(spawn(astroBin, ['build'], {
+    const code = await supervise(
+      spawn(astroBin, ['build'], {
         stdio: 'inherit',
         env: { ...process.env, NODE_ENV: 'production' },
-      }));
+      }),
+    );
     if (code !== 0) throw new Error('astro build failed');
   }
 
@@ -56,7 +59,7 @@ async function main(): Promise<void> {
   running.push(fakes);
   Object.assign(process.env, serviceEnv(fakes.fakes));
 
-  const server = startServer(config.host, config.port);
+  const server = startServer(config.host, config.port, dev ? undefined : await bundleServer(root));
   void supervise(server).then((code) => shutdown(code ?? 0));
   printBanner(config.publicUrl, seeded, fakes.fakes);
 }
@@ -74,7 +77,9 @@ function watchParent(): void {
 
 /** Track a child so shutdown stops it; resolves with its exit code. */
 function supervise(child: ChildProcess): Promise<number | null> {
-  const exited = new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
+  const exited = new Promise<number | null>((resolve) =>
+    child.once('exit', (code) => resolve(code)),
+  );
   running.push({
     stop: async () => {
       if (child.exitCode !== null || child.signalCode !== null) return;
@@ -85,13 +90,16 @@ function supervise(child: ChildProcess): Promise<number | null> {
   return exited;
 }
 
-function startServer(host: string, port: number): ChildProcess {
+/** The dev server, or the production wrapper from its bundle (see server-bundle.ts). */
+function startServer(host: string, port: number, bundle?: string): ChildProcess {
   const env = { ...process.env, HOST: host, PORT: String(port) };
-  if (dev) {
-    return spawn(astroBin, ['dev', '--host', host, '--port', String(port)], { stdio: 'inherit', env });
+  if (!bundle) {
+    return spawn(astroBin, ['dev', '--host', host, '--port', String(port)], {
+      stdio: 'inherit',
+      env,
+    });
   }
-  const serve = path.join(root, 'src', 'lib', 'commands', 'serve.ts');
-  return spawn(process.execPath, ['--import', 'tsx', serve], { stdio: 'inherit', env });
+  return spawn(process.execPath, [bundle], { stdio: 'inherit', env });
 }
 
 function printBanner(url: string, seeded: boolean, fakes: { name: string; url: string }[]): void {
