@@ -83,9 +83,10 @@ function refuse(decision: Exclude<Decision, 'allow'>, api: boolean, context: API
   return forbiddenPage();
 }
 
+// Plain HTML: the hash-based CSP (src/lib/server/security-headers.ts) allows no inline style here.
 function forbiddenPage(): Response {
   const html = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Not for this account · Drainwright</title></head>
-<body style="font-family:system-ui,sans-serif;max-width:32rem;margin:3rem auto;padding:0 1rem;color:#14212b">
+<body>
 <h1>This page is not open to your account</h1>
 <p>Your role in this organisation does not include it. Ask the account owner if you need it.</p>
 <p><a href="/app">Back to your Drainwright</a></p></body></html>`;
