@@ -43,6 +43,17 @@ function asset(suffix: string): { url: string; bytes: Buffer } {
   return { url: `/_astro/${name}`, bytes: fs.readFileSync(path.join(dir, name)) };
 }
 
+/** A session for the seeded owner, inserted as Auth.js's database sessions store it. */
+function signIn(): string {
+  const db = new Database(path.join(app.dataDir, 'drainwright.sqlite'));
+  const token = `test-compression-${'x'.repeat(24)}`;
+  db.prepare(
+    'insert or replace into sessions (session_token, user_id, expires) values (?, ?, ?)',
+  ).run(token, 'usr_demo_owner', Date.now() + 3_600_000);
+  db.close();
+  return `authjs.session-token=${token}`;
+}
+
 beforeAll(async () => {
   app = await startApp(48010);
 });
@@ -77,9 +88,13 @@ describe('response compression', () => {
     expect(packedCss.headers['content-encoding']).toBe('gzip');
     expect(gunzipSync(packedCss.body).equals(css.bytes)).toBe(true);
 
-    // The catalogue is server-rendered JSON of a few KB: the streamed (not static) path.
-    const plainJson = await get(`${app.url}/api/v1/catalog`);
-    const packedJson = await get(`${app.url}/api/v1/catalog`, { 'accept-encoding': 'gzip' });
+    // A signed-in JSON answer rendered by Astro (the /api/v1 short path sends its own, uncompressed).
+    const cookie = signIn();
+    const plainJson = await get(`${app.url}/api/jobs?pageSize=100`, { cookie });
+    const packedJson = await get(`${app.url}/api/jobs?pageSize=100`, {
+      cookie,
+      'accept-encoding': 'gzip',
+    });
     expect(plainJson.status).toBe(200);
     expect(plainJson.headers['content-type']).toMatch(/json/);
     expect(plainJson.body.length).toBeGreaterThan(1024);
@@ -125,15 +140,7 @@ describe('response compression', () => {
   });
 
   test('does not compress a download (CSV export), which keeps its plain bytes', async () => {
-    const db = new Database(path.join(app.dataDir, 'drainwright.sqlite'));
-    const token = `test-compression-${'x'.repeat(24)}`;
-    db.prepare('insert into sessions (session_token, user_id, expires) values (?, ?, ?)').run(
-      token,
-      'usr_demo_owner',
-      Date.now() + 3_600_000,
-    );
-    db.close();
-    const cookie = `authjs.session-token=${token}`;
+    const cookie = signIn();
     const url = `${app.url}/api/jobs/export?format=csv`;
     const plain = await get(url, { cookie });
     const asked = await get(url, { cookie, 'accept-encoding': 'br, gzip' });
