@@ -30,38 +30,58 @@ export function errorFields(error: unknown, withStack = false): Record<string, s
   return fields;
 }
 
+/**
+ * stdout written asynchronously: a line costs the request no write system call, and lines that
+ * pile up while a write is in flight go out together. What is still buffered when the process
+ * exits (including after an uncaught exception) is written synchronously on the way out.
+ */
+function destination(): pino.DestinationStream {
+  const stream = pino.destination({ dest: 1, sync: false });
+  process.once('exit', () => {
+    try {
+      stream.flushSync();
+    } catch {
+      // stdout already closed: nothing left to write to
+    }
+  });
+  return stream;
+}
+
 function createLogger(): Logger {
   const level = levelFromEnv();
   const withStack = level === 'debug' || level === 'trace';
   const serialize = (error: unknown): Record<string, string> => errorFields(error, withStack);
-  return pino({
-    level,
-    base: { service: 'drainwright', pid: process.pid },
-    timestamp: pino.stdTimeFunctions.isoTime,
-    formatters: { level: (label) => ({ level: label }) },
-    serializers: { err: serialize, cause: serialize },
-    // Lines written while a request is handled carry its id.
-    mixin: () => {
-      const reqId = currentRequestId();
-      return reqId ? { reqId } : {};
+  return pino(
+    {
+      level,
+      base: { service: 'drainwright', pid: process.pid },
+      timestamp: pino.stdTimeFunctions.isoTime,
+      formatters: { level: (label) => ({ level: label }) },
+      serializers: { err: serialize, cause: serialize },
+      // Lines written while a request is handled carry its id.
+      mixin: () => {
+        const reqId = currentRequestId();
+        return reqId ? { reqId } : {};
+      },
+      // Belt and braces for fields someone might add later. Top-level paths only: wildcard
+      // paths made every line about 2.5 times slower to write.
+      redact: {
+        paths: [
+          'headers',
+          'cookie',
+          'cookies',
+          'authorization',
+          'token',
+          'secret',
+          'password',
+          'url',
+          'body',
+        ],
+        censor: REDACTED,
+      },
     },
-    // Belt and braces for fields someone might add later. Top-level paths only: wildcard
-    // paths made every line about 2.5 times slower to write.
-    redact: {
-      paths: [
-        'headers',
-        'cookie',
-        'cookies',
-        'authorization',
-        'token',
-        'secret',
-        'password',
-        'url',
-        'body',
-      ],
-      censor: REDACTED,
-    },
-  });
+    destination(),
+  );
 }
 
 const KEY = Symbol.for('drainwright.logger');
