@@ -3,6 +3,7 @@ import path from 'node:path';
 import Database from 'better-sqlite3';
 import type { BrowserContext, Page } from 'playwright-core';
 import { startApp } from '../helpers/server';
+import { assertPortFree } from '../support/helpers';
 import type { StartedApp } from '../helpers/server';
 
 /**
@@ -28,6 +29,8 @@ export const SUPPORT = 'usr_demo_support';
 export const ORG = 'org_demo_heronsgate';
 
 export async function startSecApp(port: number, env: Record<string, string> = {}): Promise<SecApp> {
+  // A leftover app on the port would answer the health check with another database.
+  await assertPortFree(port);
   const app = await startApp(port, env);
   const db = new Database(path.join(app.dataDir, 'drainwright.sqlite'));
   const session = (userId: string): string => {
