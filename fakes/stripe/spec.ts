@@ -11,8 +11,9 @@ export const FAKE_STRIPE_WEBHOOK_SECRET = 'whsec_drainwright_local_fake';
 /**
  * The payments fake's port: FAKE_STRIPE_PORT, else 4620 beside the default app port, else the
  * app's PORT + 12000 so apps started side by side (tests, engineers) do not share one fake, and the
- * range never meets the e-mail fake's PORT + 10000 while the app ports in use span < 2000 (tests
- * use 46100–47999).
+ * range never meets the e-mail fake's PORT + 10000 unless two apps run 2000 apart (tests keep their
+ * ports in 16100–19999, below Linux's ephemeral range 32768–60999 even with these offsets, so a
+ * port the OS hands to an outgoing socket or a test's free-port fake never takes one of them).
  */
 export function stripePort(): number {
   const explicit = Number.parseInt(process.env.FAKE_STRIPE_PORT ?? '', 10);

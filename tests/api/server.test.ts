@@ -15,8 +15,8 @@ let limited: StartedApp;
 
 beforeAll(async () => {
   // One after the other: each start rebuilds when sources changed, and two builds would race.
-  app = await startApp(46100);
-  limited = await startApp(46101, { CALC_RATE_LIMIT_PER_MINUTE: '3' });
+  app = await startApp(16100);
+  limited = await startApp(16101, { CALC_RATE_LIMIT_PER_MINUTE: '3' });
 }, 300_000);
 
 afterAll(async () => {

@@ -6,13 +6,13 @@ import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
 // The real start command (built app, migrations, seed, fakes) and Debian chromium at 360 × 740.
-const PORT = 46320;
-const INBOX = 'http://127.0.0.1:46321';
+const PORT = 16320;
+const INBOX = 'http://127.0.0.1:16321';
 let app: StartedApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  app = await startApp(PORT, { FAKE_RESEND_PORT: '46321' });
+  app = await startApp(PORT, { FAKE_RESEND_PORT: '16321' });
   browser = await launchBrowser();
 }, 180_000);
 

@@ -11,8 +11,8 @@ import path from 'node:path';
 import { buildIsStale } from '../../src/lib/commands/build-check';
 import { startApp } from '../helpers/server';
 
-const APP_PORT = 46190;
-const BARE_PORT = 46191;
+const APP_PORT = 16190;
+const BARE_PORT = 16191;
 const SECONDS = Number(process.env.BENCH_SECONDS) || 10;
 
 const siphonBody = JSON.stringify({

@@ -4,7 +4,7 @@
  * findings, console errors, and Lighthouse mobile performance and accessibility.
  *
  * BENCH_URL=http://127.0.0.1:4321 measures a server already running; otherwise the real start
- * command is run on port 48020 with a temp DATA_DIR. BENCH_SKIP_LIGHTHOUSE=1 skips Lighthouse;
+ * command is run on port 18020 with a temp DATA_DIR. BENCH_SKIP_LIGHTHOUSE=1 skips Lighthouse;
  * BENCH_PAGES (comma-separated paths) limits the pages; BENCH_LH_RUNS (default 3) sets how many
  * Lighthouse runs each page's median and best come from; BENCH_LH_CALIBRATE=1 sets Lighthouse's
  * CPU slowdown from the host's benchmarkIndex instead of the default 4x (a diagnostic for a slow
@@ -156,7 +156,7 @@ function printTable(rows: Row[]): void {
 
 async function main(): Promise<void> {
   let app: StartedApp | undefined;
-  const base = process.env.BENCH_URL ?? (app = await startApp(48020)).url;
+  const base = process.env.BENCH_URL ?? (app = await startApp(18020)).url;
   const browser = await launchBrowser();
   const rows: Row[] = [];
   try {

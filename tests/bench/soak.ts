@@ -17,7 +17,7 @@ import { buildIsStale } from '../../src/lib/commands/build-check';
 import { drainRequest, lineRequest, siphonRequest } from '../api/samples';
 import { startApp } from '../helpers/server';
 
-const PORT = 48600;
+const PORT = 18660;
 const SECONDS = Number(process.env.SOAK_SECONDS) || 60;
 const CONNECTIONS = Number(process.env.SOAK_CONNECTIONS) || 50;
 const WARMUP = Number(process.env.SOAK_WARMUP_SECONDS) || 10;

@@ -6,9 +6,9 @@ import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 import { OWNER_ID, SESSION_COOKIE, appDb, deliveriesSettled, sessionFor } from './helpers';
 
-// Ports from the billing range 46400–46499.
-const APP_PORT = 46421;
-const FAKE_PORT = 46431;
+// Ports from the billing range 16400–16499.
+const APP_PORT = 16421;
+const FAKE_PORT = 16431;
 
 let app: StartedApp;
 let browser: Browser;
@@ -18,7 +18,7 @@ beforeAll(async () => {
   [app, browser] = await Promise.all([
     startApp(APP_PORT, {
       FAKE_STRIPE_PORT: String(FAKE_PORT),
-      FAKE_RESEND_PORT: '46432',
+      FAKE_RESEND_PORT: '16432',
       FAKE_STRIPE_CHAOS: '1',
       STRIPE_SECRET_KEY: '',
       STRIPE_WEBHOOK_SECRET: '',

@@ -9,9 +9,9 @@ import { startFakes } from '../../fakes/runner';
 import type { RunningFakes } from '../../fakes/runner';
 import { deliveriesSettled, payWith, sdkFor } from './helpers';
 
-// Ports from the billing range 46400–46499.
-const FAKE_PORT = 46441;
-const HOOK_PORT = 46442;
+// Ports from the billing range 16400–16499.
+const FAKE_PORT = 16441;
+const HOOK_PORT = 16442;
 const SECRET = 'whsec_fake_test_only';
 const entry = fileURLToPath(new URL('../../fakes/stripe/server.ts', import.meta.url));
 

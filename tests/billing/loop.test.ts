@@ -17,9 +17,9 @@ import {
   sessionFor,
 } from './helpers';
 
-// Ports from the billing range 46400–46499.
-const APP_PORT = 46401;
-const FAKE_PORT = 46411;
+// Ports from the billing range 16400–16499.
+const APP_PORT = 16401;
+const FAKE_PORT = 16411;
 const FAKE = `http://127.0.0.1:${FAKE_PORT}`;
 
 let app: StartedApp;
@@ -44,7 +44,7 @@ const summary = async (): Promise<Summary> =>
 beforeAll(async () => {
   app = await startApp(APP_PORT, {
     FAKE_STRIPE_PORT: String(FAKE_PORT),
-    FAKE_RESEND_PORT: '46412',
+    FAKE_RESEND_PORT: '16412',
     FAKE_STRIPE_CHAOS: '1',
     STRIPE_SECRET_KEY: '',
     STRIPE_WEBHOOK_SECRET: '',

@@ -5,12 +5,12 @@ import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
-// Ports 46500–46549 belong to the offline, accessibility and page-budget checks.
+// Ports 16500–16549 belong to the offline, accessibility and page-budget checks.
 let app: StartedApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  [app, browser] = await Promise.all([startApp(46501), launchBrowser()]);
+  [app, browser] = await Promise.all([startApp(16501), launchBrowser()]);
 });
 
 afterAll(async () => {

@@ -10,7 +10,7 @@ let app: StartedApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  [app, browser] = await Promise.all([startApp(46202), launchBrowser()]);
+  [app, browser] = await Promise.all([startApp(16202), launchBrowser()]);
 });
 
 afterAll(async () => {

@@ -12,7 +12,7 @@ let app: StartedApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  [app, browser] = await Promise.all([startApp(46201), launchBrowser()]);
+  [app, browser] = await Promise.all([startApp(16201), launchBrowser()]);
 });
 
 afterAll(async () => {

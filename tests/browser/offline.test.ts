@@ -4,13 +4,13 @@ import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
-// Ports 46500–46549 belong to these tests.
+// Ports 16500–16549 belong to these tests.
 let app: StartedApp;
 let browser: Browser;
 let context: BrowserContext;
 
 beforeAll(async () => {
-  [app, browser] = await Promise.all([startApp(46500), launchBrowser()]);
+  [app, browser] = await Promise.all([startApp(16500), launchBrowser()]);
   context = await phoneContext(browser, app.url);
 });
 

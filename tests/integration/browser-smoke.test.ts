@@ -8,7 +8,7 @@ let app: StartedApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  [app, browser] = await Promise.all([startApp(47903), launchBrowser()]);
+  [app, browser] = await Promise.all([startApp(17903), launchBrowser()]);
 });
 
 afterAll(async () => {

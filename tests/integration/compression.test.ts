@@ -55,7 +55,7 @@ function signIn(): string {
 }
 
 beforeAll(async () => {
-  app = await startApp(48010);
+  app = await startApp(18010);
 });
 
 afterAll(async () => {

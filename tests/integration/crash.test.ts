@@ -16,8 +16,8 @@ import { lineRequest } from '../api/samples';
  * transaction survives the process dying, with synchronous=NORMAL included.
  */
 
-const PORT = 48500;
-const RESTART_PORT = 48502;
+const PORT = 18700;
+const RESTART_PORT = 18702;
 const WORKERS = 16;
 /** Kill once this many saves were acknowledged (jobs and calculations together). */
 const KILL_AFTER = 120;

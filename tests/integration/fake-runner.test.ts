@@ -14,17 +14,17 @@ async function answers(url: string): Promise<boolean> {
 
 describe('startFakes', () => {
   test('starts a fake, waits until it answers, and stops it', async () => {
-    const running = await startFakes([{ name: 'dummy', entry: dummy, port: 47811 }], true);
-    expect(running.fakes).toEqual([{ name: 'dummy', port: 47811, url: 'http://127.0.0.1:47811' }]);
-    const body = await (await fetch('http://127.0.0.1:47811/anything')).json();
-    expect(body).toEqual({ ok: true, path: '/anything', port: 47811 });
+    const running = await startFakes([{ name: 'dummy', entry: dummy, port: 17811 }], true);
+    expect(running.fakes).toEqual([{ name: 'dummy', port: 17811, url: 'http://127.0.0.1:17811' }]);
+    const body = await (await fetch('http://127.0.0.1:17811/anything')).json();
+    expect(body).toEqual({ ok: true, path: '/anything', port: 17811 });
     await running.stop();
-    expect(await answers('http://127.0.0.1:47811/health')).toBe(false);
+    expect(await answers('http://127.0.0.1:17811/health')).toBe(false);
   });
 
   test('fails clearly when a fake exits before it is ready', async () => {
     const broken = path.resolve('tests/fixtures/fakes/does-not-exist.ts');
-    await expect(startFakes([{ name: 'broken', entry: broken, port: 47812 }], true)).rejects.toThrow(
+    await expect(startFakes([{ name: 'broken', entry: broken, port: 17812 }], true)).rejects.toThrow(
       /broken exited before it was ready/,
     );
   });

@@ -4,7 +4,7 @@ import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
 // The real start command; its fakes listen on PORT+10000 (e-mail) and PORT+12000 (payments).
-const PORT = 49020;
+const PORT = 19020;
 let app: StartedApp;
 
 beforeAll(async () => {

@@ -5,7 +5,7 @@ import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 
 // The built app through the real start command; e-mail fake on PORT+10000.
-const PORT = 49040;
+const PORT = 19040;
 const INBOX = `http://127.0.0.1:${PORT + 10_000}`;
 let app: StartedApp;
 

@@ -7,7 +7,7 @@ import type { StartedApp } from '../helpers/server';
 let app: StartedApp;
 
 beforeAll(async () => {
-  app = await startApp(47901);
+  app = await startApp(17901);
 });
 
 afterAll(async () => {
@@ -57,7 +57,7 @@ describe('npm start', () => {
   });
 
   test('stops everything when only npm is sent SIGTERM', async () => {
-    const second = await startApp(47902);
+    const second = await startApp(17902);
     second.child.kill('SIGTERM');
     await new Promise((r) => setTimeout(r, 2500));
     await expect(fetch(`${second.url}/api/health`, { signal: AbortSignal.timeout(1000) })).rejects.toThrow();

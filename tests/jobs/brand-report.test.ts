@@ -8,7 +8,7 @@ let t: JobsApp;
 const OWNER = 'usr_demo_owner';
 
 beforeAll(async () => {
-  t = await startJobsApp(46797);
+  t = await startJobsApp(16797);
 }, 120_000);
 afterAll(async () => {
   t?.db.close();

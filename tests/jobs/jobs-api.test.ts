@@ -7,7 +7,7 @@ const OWNER = 'usr_demo_owner';
 const json = { 'content-type': 'application/json' };
 
 beforeAll(async () => {
-  t = await startJobsApp(46798);
+  t = await startJobsApp(16798);
 }, 120_000);
 afterAll(async () => {
   t?.db.close();

@@ -9,7 +9,7 @@ let t: JobsApp;
 let browser: Browser;
 
 beforeAll(async () => {
-  t = await startJobsApp(46796);
+  t = await startJobsApp(16796);
   browser = await launchBrowser();
 }, 120_000);
 afterAll(async () => {

@@ -14,8 +14,8 @@ let prod: SecApp;
 
 beforeAll(async () => {
   [dev, prod] = await Promise.all([
-    startSecApp(49530),
-    startSecApp(49540, { NODE_ENV: 'production' }),
+    startSecApp(19530),
+    startSecApp(19540, { NODE_ENV: 'production' }),
   ]);
 }, 180_000);
 afterAll(async () => {

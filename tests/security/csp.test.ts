@@ -10,7 +10,7 @@ import { launchBrowser, phoneContext } from '../helpers/browser';
 import { OWNER, SUPPORT, hydrated, signIn, startSecApp, watchPage } from './helpers';
 import type { SecApp } from './helpers';
 
-const PORT = 49510;
+const PORT = 19510;
 let sec: SecApp;
 let browser: Browser;
 

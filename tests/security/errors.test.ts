@@ -15,7 +15,7 @@ let sec: SecApp;
 let secrets: string[];
 
 beforeAll(async () => {
-  sec = await startSecApp(49570);
+  sec = await startSecApp(19570);
   const authSecret = fs.readFileSync(path.join(sec.app.dataDir, 'auth-secret'), 'utf8').trim();
   secrets = [authSecret, FAKE_RESEND_KEY, FAKE_STRIPE_KEY, FAKE_STRIPE_WEBHOOK_SECRET];
 }, 120_000);

@@ -12,7 +12,7 @@ import type { SecApp } from './helpers';
 let sec: SecApp;
 
 beforeAll(async () => {
-  sec = await startSecApp(49560);
+  sec = await startSecApp(19560);
 }, 120_000);
 afterAll(async () => {
   await sec?.stop();

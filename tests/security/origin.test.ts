@@ -76,7 +76,7 @@ const guarded = ALL.filter((t) => !ruleFor(t.path).originExempt);
 let sec: SecApp;
 
 beforeAll(async () => {
-  sec = await startSecApp(49550);
+  sec = await startSecApp(19550);
 }, 120_000);
 afterAll(async () => {
   await sec?.stop();

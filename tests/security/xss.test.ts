@@ -17,7 +17,7 @@ import type { SecApp } from './helpers';
 import { FLAG_EMAIL, FORMULAS, PAYLOAD, SHORT, plant } from './payloads';
 import type { Planted } from './payloads';
 
-const PORT = 49520;
+const PORT = 19520;
 let sec: SecApp;
 let browser: Browser;
 let planted: Planted;

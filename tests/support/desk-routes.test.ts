@@ -7,7 +7,7 @@ import type { StartedApp } from '../helpers/server';
 import { assertPortFree, ADMIN_ID, appDb, prepareDesk, sessionCookie } from './helpers';
 
 // Role tests for every flag and support-desk route, on the real server with the real route table.
-const PORT = 46600;
+const PORT = 16600;
 const ROLES = ['anonymous', 'member', 'owner', 'support', 'admin'] as const;
 type Role = (typeof ROLES)[number];
 const USER_OF: Record<Exclude<Role, 'anonymous'>, string> = {

@@ -15,7 +15,7 @@ import {
 
 // A crew member on a phone flags a quick-check result signed out; support answers from the desk
 // (also on a phone); the reporter's e-mail arrives in the fake inbox and its link shows the reply.
-const PORT = 46610;
+const PORT = 16610;
 const FAKE = `http://127.0.0.1:${PORT + 10_000}`;
 const REPORTER = 'pond.crew@example.org';
 const REPLY =

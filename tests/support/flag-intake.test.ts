@@ -15,7 +15,7 @@ import {
 
 // POST /api/flags end to end: validation, the reporter's e-mail with its link, a reply by e-mail
 // through the real resend SDK into the e-mail fake, and the reporter's own views.
-const PORT = 46602;
+const PORT = 16602;
 const FAKE = `http://127.0.0.1:${PORT + 10_000}`;
 
 const snapshot = {

@@ -4,7 +4,7 @@ import type { StartedApp } from '../helpers/server';
 import { assertPortFree } from './helpers';
 
 // A small limit so the test reaches it; the default is 10 flags per IP per 15 minutes.
-const PORT = 46604;
+const PORT = 16604;
 let app: StartedApp;
 
 beforeAll(async () => {
