@@ -7,6 +7,8 @@
 import autocannon from 'autocannon';
 import { spawn, spawnSync } from 'node:child_process';
 import type { ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { buildIsStale } from '../../src/lib/commands/build-check';
 import { startApp } from '../helpers/server';
@@ -65,7 +67,9 @@ async function main(): Promise<void> {
     if (spawnSync(astro, ['build'], { stdio: 'inherit' }).status !== 0)
       throw new Error('build failed');
   }
-  const app = await startApp(APP_PORT, { CALC_RATE_LIMIT_PER_MINUTE: '0' });
+  // Production's info level: one access-log line per request, written to a file, not to us.
+  const logFile = path.join(os.tmpdir(), `dw-bench-api-${process.pid}.log`);
+  const app = await startApp(APP_PORT, { CALC_RATE_LIMIT_PER_MINUTE: '0', LOG_LEVEL: 'info' }, logFile);
   const bare = await bareServer();
   try {
     const floor = await load(`http://127.0.0.1:${BARE_PORT}/`);
@@ -83,6 +87,7 @@ async function main(): Promise<void> {
   } finally {
     bare.kill();
     await app.stop();
+    fs.rmSync(logFile, { force: true });
   }
 }
 

@@ -13,27 +13,39 @@ export interface StartedApp {
   stop: (signal?: NodeJS.Signals) => Promise<number | null>;
 }
 
-/** Run `npm start` (the real start command on the built app) on a free port and a temp DATA_DIR. */
-export async function startApp(port: number, env: Record<string, string> = {}): Promise<StartedApp> {
+/**
+ * Run `npm start` (the real start command on the built app) on a given port and a temp DATA_DIR.
+ * With `logFile` its output goes straight to that file instead of through this process (a
+ * benchmark must not spend its load generator's time reading the access log); output() is then
+ * read from the file.
+ */
+export async function startApp(
+  port: number,
+  env: Record<string, string> = {},
+  logFile?: string,
+): Promise<StartedApp> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dw-app-'));
+  const out = logFile === undefined ? 'pipe' : fs.openSync(logFile, 'w');
   const child = spawn('npm', ['start', '--silent'], {
     env: { ...process.env, ...env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir },
-    stdio: ['ignore', 'pipe', 'pipe'],
+    stdio: ['ignore', out, out],
     // Its own process group, so stop() can send Ctrl-C to the whole tree as a terminal would.
     detached: true,
   });
+  if (typeof out === 'number') fs.closeSync(out);
   let log = '';
   child.stdout?.on('data', (d) => (log += d));
   child.stderr?.on('data', (d) => (log += d));
+  const output = (): string => (logFile === undefined ? log : fs.readFileSync(logFile, 'utf8'));
   const url = `http://127.0.0.1:${port}`;
-  await waitFor(`${url}/api/health`, child, () => log);
+  await waitFor(`${url}/api/health`, child, output);
   const stop = (signal: NodeJS.Signals = 'SIGINT'): Promise<number | null> =>
     new Promise((resolve) => {
       if (child.exitCode !== null || child.signalCode !== null) return resolve(child.exitCode);
       child.once('exit', (code) => resolve(code));
       process.kill(-child.pid!, signal);
     });
-  return { url, dataDir, child, output: () => log, stop };
+  return { url, dataDir, child, output, stop };
 }
 
 async function waitFor(url: string, child: ChildProcess, log: () => string): Promise<void> {

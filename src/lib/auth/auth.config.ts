@@ -1,13 +1,11 @@
 import Resend from '@auth/core/providers/resend';
 import type { Adapter } from '@auth/core/adapters';
-import { DrizzleAdapter } from '@auth/drizzle-adapter';
 import { defineConfig } from 'auth-astro';
-import { accounts, sessions, users, verificationTokens } from '../../../db/schema';
 import { ensureAuthSecret } from '../commands/secret';
 import { getConfig } from '../config';
 import { getDb } from '../db/client';
 import { authLogger } from '../server/auth-logger';
-import { createPersonalOrganisation } from '../data/organisations';
+import { drainwrightAdapter } from './adapter';
 import { sendEmail, senderAddress } from '../email/send';
 import { signInEmail } from '../email/sign-in-email';
 
@@ -18,12 +16,7 @@ const SESSION_DAYS = 30;
 /** The adapter, built on first use so importing this file opens no database (e.g. at build). */
 let adapter: Adapter | undefined;
 function lazyAdapter(): Adapter {
-  adapter ??= DrizzleAdapter(getDb(), {
-    usersTable: users,
-    accountsTable: accounts,
-    sessionsTable: sessions,
-    verificationTokensTable: verificationTokens,
-  });
+  adapter ??= drainwrightAdapter(getDb());
   return adapter;
 }
 
@@ -62,11 +55,6 @@ const config = defineConfig({
   pages: { signIn: '/signin', verifyRequest: '/signin/sent', error: '/signin' },
   // One JSON line per auth error, no stack traces (src/lib/server/auth-logger.ts).
   logger: authLogger,
-  events: {
-    async createUser({ user }) {
-      if (user.id) createPersonalOrganisation(user.id, user.name || user.email || 'My workspace');
-    },
-  },
   callbacks: {
     // Only ever send people back into this site.
     redirect({ url, baseUrl }) {

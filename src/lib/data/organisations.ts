@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
 import { memberships, organisations } from '../../../db/schema';
 import { getDb } from '../db/client';
+import type { Db } from '../db/client';
 
 export interface OrganisationView {
   id: string;
@@ -25,14 +26,19 @@ export function getOrganisation(orgId: string): OrganisationView | null {
   return row ?? null;
 }
 
-/** Give a new user their own free workspace, with them as its owner. */
-export function createPersonalOrganisation(userId: string, name: string): string {
+/**
+ * Give a new user their own free workspace, with them as its owner: the organisation and the
+ * membership rows, written through `tx` so they land with the user row or not at all (see
+ * src/lib/auth/adapter.ts).
+ */
+export function insertPersonalOrganisation(
+  tx: Pick<Db, 'insert'>,
+  userId: string,
+  name: string,
+): string {
   const id = `org_${randomUUID()}`;
-  const db = getDb();
-  db.transaction((tx) => {
-    tx.insert(organisations).values({ id, name, plan: 'free', personal: true }).run();
-    tx.insert(memberships).values({ organisationId: id, userId, role: 'owner' }).run();
-  });
+  tx.insert(organisations).values({ id, name, plan: 'free', personal: true }).run();
+  tx.insert(memberships).values({ organisationId: id, userId, role: 'owner' }).run();
   return id;
 }
 

@@ -60,10 +60,19 @@ function fromNode(req: http.IncomingMessage, url: URL): ApiRequest {
   };
 }
 
-function send(res: http.ServerResponse, answer: ApiAnswer, requestId: string): void {
+/**
+ * Write the answer. One sent before the body was read (413, 415, a refusal) closes the
+ * connection and drains what arrived, so the client's next request cannot queue behind the rest
+ * of that body on a keep-alive socket. X-Request-Id is already set (access-log.ts).
+ */
+function send(req: http.IncomingMessage, res: http.ServerResponse, answer: ApiAnswer): void {
   const body = answer.body === undefined ? undefined : JSON.stringify(answer.body);
-  const headers: http.OutgoingHttpHeaders = { ...answer.headers, 'X-Request-Id': requestId };
+  const headers: http.OutgoingHttpHeaders = answer.headers;
   if (body !== undefined) headers['Content-Length'] = Buffer.byteLength(body);
+  if (!req.complete) {
+    headers.Connection = 'close';
+    res.once('finish', () => req.resume());
+  }
   res.writeHead(answer.status, headers);
   res.end(body);
 }
@@ -81,7 +90,7 @@ export function serveApiV1(req: http.IncomingMessage, res: http.ServerResponse):
   if (!operation) return false;
   const request = fromNode(req, url);
   Promise.resolve(operation(request)).then(
-    (answer) => send(res, answer, request.requestId),
+    (answer) => send(req, res, answer),
     // Operations are guarded and do not throw; this only covers a socket gone mid-answer.
     () => res.destroy(),
   );
