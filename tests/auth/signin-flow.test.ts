@@ -47,6 +47,17 @@ describe('sign-in by e-mail link', () => {
     await context.close();
   });
 
+  test('does give a first-time e-mail its own free workspace, owned by it', async () => {
+    const email = 'new.crew@riverside.test';
+    const form = new URLSearchParams({ email, next: '/app' });
+    const sent = await fetch(`${app.url}/signin`, { method: 'POST', body: form, headers: { Origin: app.url }, redirect: 'manual' });
+    expect(sent.status).toBe(303);
+    const callback = await fetch(await latestLink(email), { redirect: 'manual' });
+    const cookie = callback.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const home = await (await fetch(`${app.url}/app`, { headers: { Cookie: cookie } })).text();
+    expect(home).toMatch(/data-testid="current-org"[^>]*>\s*Working in <strong[^>]*>new\.crew@riverside\.test<\/strong> as owner\s*· Free plan/);
+  });
+
   test('does refuse a used link, signed-out API calls, crew on owner APIs and cross-site posts', async () => {
     const used = await latestLink('rosa@heronsgate.example');
     const again = await fetch(used, { redirect: 'manual' });
