@@ -9,7 +9,7 @@ import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
 import { trackRequest } from '../server/access-log';
 import { serveApiV1 } from '../server/api-fast-path';
-import { refuseOversizedBody } from '../server/body-limit';
+import { closeIfBodyUnread, refuseOversizedBody } from '../server/body-limit';
 import { compress } from '../server/compression';
 import { routeConsoleToLogger } from '../server/console-bridge';
 import { logger } from '../server/logger';
@@ -20,20 +20,13 @@ type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
 
 const GRACE_MS = 10_000;
 
-/**
- * A response sent before its request body was read (413, 415, early 4xx) must not leave the rest
- * of that body on a keep-alive socket, where the client's next request would queue behind it and
- * stall. Such answers close the connection; what arrived of the body is drained.
- */
-function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerResponse): void {
+/** Astro writes its own status line, so the unread-body check runs inside its writeHead. */
+function closeOnUnreadBody(req: http.IncomingMessage, res: http.ServerResponse): void {
   const writeHead = res.writeHead.bind(res) as (...args: unknown[]) => http.ServerResponse;
   res.writeHead = ((...args: unknown[]) => {
-    if (!req.complete) res.setHeader('Connection', 'close');
+    closeIfBodyUnread(req, res);
     return writeHead(...args);
   }) as typeof res.writeHead;
-  res.once('finish', () => {
-    if (!req.complete) req.resume();
-  });
 }
 
 async function main(): Promise<void> {
@@ -51,7 +44,7 @@ async function main(): Promise<void> {
     // answers skip compression: it goes first, past the page machinery.
     if (serveApiV1(req, res)) return;
     if (refuseOversizedBody(req, res)) return;
-    closeIfBodyUnread(req, res);
+    closeOnUnreadBody(req, res);
     compress(req, res, () => runWithRequestId(id, () => handler(req, res)));
   });
   server.keepAliveTimeout = 5_000;

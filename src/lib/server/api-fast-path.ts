@@ -9,6 +9,7 @@ import type http from 'node:http';
 import type { ApiAnswer, ApiRequest, BodyBytes } from '../api/answer';
 import { concatChunks } from '../api/body';
 import { v1Operation } from '../api/v1-routes';
+import { closeIfBodyUnread } from './body-limit';
 import { requestIdFor } from './request-id';
 
 function first(header: string | string[] | undefined): string | undefined {
@@ -60,19 +61,12 @@ function fromNode(req: http.IncomingMessage, url: URL): ApiRequest {
   };
 }
 
-/**
- * Write the answer. One sent before the body was read (413, 415, a refusal) closes the
- * connection and drains what arrived, so the client's next request cannot queue behind the rest
- * of that body on a keep-alive socket. X-Request-Id is already set (access-log.ts).
- */
+/** Write the answer (X-Request-Id is already set, access-log.ts). */
 function send(req: http.IncomingMessage, res: http.ServerResponse, answer: ApiAnswer): void {
   const body = answer.body === undefined ? undefined : JSON.stringify(answer.body);
   const headers: http.OutgoingHttpHeaders = answer.headers;
   if (body !== undefined) headers['Content-Length'] = Buffer.byteLength(body);
-  if (!req.complete) {
-    headers.Connection = 'close';
-    res.once('finish', () => req.resume());
-  }
+  closeIfBodyUnread(req, res);
   res.writeHead(answer.status, headers);
   res.end(body);
 }

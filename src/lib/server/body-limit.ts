@@ -58,3 +58,14 @@ async function* capped(req: http.IncomingMessage, limit: number): AsyncGenerator
     yield chunk;
   }
 }
+
+/**
+ * For an answer written before its request body was read (413, 415, early 4xx): close the
+ * connection and drain what arrived, so the client's next request on a keep-alive socket cannot
+ * queue behind the rest of that body. Call just before the status line is written.
+ */
+export function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerResponse): void {
+  if (req.complete) return;
+  res.setHeader('Connection', 'close');
+  res.once('finish', () => req.resume());
+}
