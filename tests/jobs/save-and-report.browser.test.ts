@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, phoneContext } from '../helpers/browser';
+import { openHydrated } from '../browser/calculators-helpers';
 import { startJobsApp } from './app-fixture';
 import type { JobsApp } from './app-fixture';
 
@@ -25,7 +26,7 @@ describe('save a quick check to a job on a phone', () => {
     const cookie = t.as('usr_demo_owner').cookie.split('=');
     await context.addCookies([{ name: cookie[0], value: cookie.slice(1).join('='), url: t.app.url }]);
     const page = await context.newPage();
-    await page.goto('/check');
+    await openHydrated(page, '/check');
     await page.getByRole('button', { name: 'Save to a job' }).click();
     await page.getByLabel('New job title').fill('Phone test pond');
     await page.getByRole('button', { name: 'Save', exact: true }).click();

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Browser } from 'playwright-core';
 import type { Db } from '../../src/lib/db/client';
 import { launchBrowser, phoneContext } from '../helpers/browser';
+import { openHydrated } from '../browser/calculators-helpers';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
 import {
@@ -43,7 +44,7 @@ describe('flagging from the quick check', () => {
   test('does reach support signed out, and the reply reaches the reporter by e-mail', async () => {
     const crew = await phoneContext(browser, app.url);
     const page = await crew.newPage();
-    await page.goto('/check');
+    await openHydrated(page, '/check');
     await page.getByRole('button', { name: 'Flag this result' }).click();
     await page.getByLabel('This looks wrong').check();
     await page.getByLabel('Tell us more (optional)').fill('Hose ran slower than this says.');

@@ -4,16 +4,16 @@
  * string up to date so the address bar is always a link to the result on screen.
  */
 import { useStore } from '@nanostores/react';
-import { useCallback, useEffect, useState } from 'react';
+import { startTransition, useCallback, useEffect, useState } from 'react';
 import type { UnitSystem } from '../hydraulics/units';
 import type { ShareRow, ShareState } from '../share-url';
 import { decodeShare, encodeShare } from '../share-url';
 import { $unitSystem } from './unit-system';
 
-/** True after the first client render. */
+/** True after the first client render (a low-priority update, so hydration is not held up). */
 export function useHydrated(): boolean {
   const [ready, setReady] = useState(false);
-  useEffect(() => setReady(true), []);
+  useEffect(() => startTransition(() => setReady(true)), []);
   return ready;
 }
 
@@ -38,8 +38,12 @@ export function useCalcState<T extends ShareState>(
   const [state, setState] = useState<T>(defaults);
   const [loaded, setLoaded] = useState(false);
   useEffect(() => {
-    setState(decodeShare(window.location.search, defaults, rowTemplates));
-    setLoaded(true);
+    const search = window.location.search;
+    // a transition: applying a shared link's inputs should not block the main thread at load
+    startTransition(() => {
+      if (search) setState(decodeShare(search, defaults, rowTemplates));
+      setLoaded(true);
+    });
     // defaults are module constants; read the URL once
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
