@@ -1,4 +1,4 @@
-import { lazy, useMemo } from 'react';
+import { lazy, useDeferredValue, useMemo } from 'react';
 import type { ReactElement } from 'react';
 import { drainHints } from '../lib/calculators/drain-hints';
 import type { DrainToolState } from '../lib/calculators/drain-tool';
@@ -34,14 +34,23 @@ const STOP_WORDS: Record<DrainResult['stop_reason'], string> = {
   siphon_breaks: 'the siphon’s crest pressure reaches its limit',
 };
 
-function compute(s: DrainToolState, system: UnitSystem) {
+function compute(s: DrainToolState) {
   try {
     const req = drainToolRequest(s);
-    const r = solveDrain(req);
-    return { req, r, hints: drainHints(req, r, s.size, s.target_time_s, system) };
+    return { req, r: solveDrain(req), size: s.size, target: s.target_time_s };
   } catch (e) {
     return { error: inputErrorText(e) };
   }
+}
+type Computed = ReturnType<typeof compute>;
+
+/**
+ * The hints run the inverse solvers, as costly as the solve itself: a deferred render, so the
+ * result shows (and the page hydrates) first and typing stays quick. None in the static HTML.
+ */
+function useHints(out: Computed, system: UnitSystem) {
+  const later = useDeferredValue<Computed | null>(out, null);
+  return useMemo(() => (later && 'r' in later ? drainHints(later.req!, later.r!, later.size!, later.target!, system) : []), [later, system]);
 }
 
 function figures(r: DrainResult): Figure[] {
@@ -59,7 +68,8 @@ function figures(r: DrainResult): Figure[] {
 export default function DrainTool(): ReactElement {
   const system = useUnitSystem();
   const { state: s, update, query } = useCalcState<DrainToolState>(DRAIN_TOOL_DEFAULTS, { fittings: FITTING_ROW, stage: STAGE_ROW });
-  const out = useMemo(() => compute(s, system), [s, system]);
+  const out = useMemo(() => compute(s), [s]);
+  const hints = useHints(out, system);
   const inputs = (
     <>
       <InputGroup title="Vessel, basin or pond">
@@ -96,7 +106,7 @@ export default function DrainTool(): ReactElement {
             chart={() => <DrawdownChart curve={out.r.curve} system={system} />}
           />
         )}
-        <HintList hints={out.hints} />
+        <HintList hints={hints} />
       </>
     );
   return <ToolLayout inputs={inputs} result={result} footer={<ShareLink query={query} />} />;

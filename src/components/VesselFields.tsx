@@ -1,9 +1,12 @@
+import { Suspense, lazy } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState, VesselShape } from '../lib/calculators/drain-tool';
 import type { UnitSystem } from '../lib/hydraulics';
 import NumberField from './NumberField';
 import SelectField from './SelectField';
-import StageTableEditor from './StageTableEditor';
+
+// the table editor brings the CSV parser: loaded only when a crew picks a depth–area table
+const StageTableEditor = lazy(() => import('./StageTableEditor'));
 
 interface Props {
   s: DrainToolState;
@@ -50,7 +53,9 @@ export default function VesselFields({ s, update, system }: Props): ReactElement
       {dims[s.shape]}
       {s.shape === 'stage_table' && (
         <div className="sm:col-span-2">
-          <StageTableEditor rows={s.stage} onChange={(rows) => update({ stage: rows })} system={system} />
+          <Suspense fallback={<p className="text-ink-faint">Loading the table editor…</p>}>
+            <StageTableEditor rows={s.stage} onChange={(rows) => update({ stage: rows })} system={system} />
+          </Suspense>
         </div>
       )}
       <NumberField name="initial_depth_m" label="Water depth now" kind="length" system={system} value={s.initial_depth_m} onChange={(v) => update({ initial_depth_m: v })} />

@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
 import { CHROMIUM_FLAGS as CHROME_FLAGS } from '../helpers/browser';
@@ -65,6 +66,11 @@ export async function openLighthouse(calibrate = false): Promise<LighthouseRunne
       { extends: 'lighthouse:default', settings: { throttling: { cpuSlowdownMultiplier } } },
     );
     benchmarkIndex = result?.lhr.environment.benchmarkIndex ?? 0;
+    // diagnostic: keep the last report of each page to read its main-thread breakdown
+    if (process.env.BENCH_LH_DUMP && result) {
+      const file = `${process.env.BENCH_LH_DUMP}/${new URL(url).pathname.replace(/\W+/g, '_') || 'root'}.json`;
+      fs.writeFileSync(file, JSON.stringify(result.lhr));
+    }
     const categories = result?.lhr.categories;
     // A run that timed out or never painted has null scores: counted as failed, not as a 0.
     if (typeof categories?.performance?.score !== 'number') {
