@@ -75,6 +75,15 @@ describe('full calculator tools on a phone', () => {
     expect(await figure(page, 'velocity')).toBe(formatQuantity('velocity', api.velocity_m_s, 'metric'));
   });
 
+  test('does show what would help on the drain-down once the deferred hints render', async () => {
+    const page = await (await phoneContext(browser, app.url)).newPage();
+    await openHydrated(page, '/drain?outlet=orifice&target_time_s=60');
+    const hints = page.getByTestId('hints');
+    await hints.waitFor();
+    // a one-minute target is far too short for the default basin: the hint says how much more
+    await expect(hints.textContent()).resolves.toMatch(/More time: it needs .+ more than you have\./);
+  });
+
   test('does take a good depth–area CSV upload and name the row of a malformed one', async () => {
     const page = await (await phoneContext(browser, app.url)).newPage();
     const errors = watchErrors(page);
