@@ -4,7 +4,8 @@
  * with a mix of public pages, calculation API calls and signed-in job reads and writes. Prints
  * requests/s, p50, p99, errors and the server process's resident memory (from /proc of the
  * server, not of this script) before and after, each read after the same idle pause, plus the
- * reading the moment the load stops. Goals: zero errors, RSS growth under 20 %.
+ * reading the moment the load stops. Goals: zero errors, RSS growth under 20 % (readings after a
+ * full collection, forced through the server's inspector; see server-memory.ts).
  * SOAK_SECONDS, SOAK_CONNECTIONS and SOAK_WARMUP_SECONDS override the defaults.
  */
 import autocannon from 'autocannon';
@@ -16,8 +17,11 @@ import Database from 'better-sqlite3';
 import { buildIsStale } from '../../src/lib/commands/build-check';
 import { drainRequest, lineRequest, siphonRequest } from '../api/samples';
 import { startApp } from '../helpers/server';
+import { openHeapProbe, rssMiB, serverPid } from './server-memory';
 
 const PORT = 18660;
+/** The server's inspector, opened by the bench only to force a collection before a reading. */
+const INSPECT_PORT = 18661;
 const SECONDS = Number(process.env.SOAK_SECONDS) || 60;
 const CONNECTIONS = Number(process.env.SOAK_CONNECTIONS) || 50;
 const WARMUP = Number(process.env.SOAK_WARMUP_SECONDS) || 10;
@@ -108,29 +112,6 @@ function mix(cookie: string, origin: string): Req[] {
   ];
 }
 
-/** The `node dist/serve.mjs` process in the app's process group (the one answering requests). */
-function serverPid(group: number): number {
-  for (const entry of fs.readdirSync('/proc')) {
-    if (!/^\d+$/.test(entry)) continue;
-    try {
-      const cmd = fs.readFileSync(`/proc/${entry}/cmdline`, 'utf8');
-      const stat = fs.readFileSync(`/proc/${entry}/stat`, 'utf8');
-      const pgrp = Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[2]);
-      if (pgrp === group && (cmd.includes('dist/serve.mjs') || cmd.includes('commands/serve.ts')))
-        return Number(entry);
-    } catch {
-      // the process ended while we looked
-    }
-  }
-  throw new Error('server process not found');
-}
-
-/** Resident memory of a process in MiB, from /proc/PID/status. */
-function rssMiB(pid: number): number {
-  const status = fs.readFileSync(`/proc/${pid}/status`, 'utf8');
-  return Number(/VmRSS:\s+(\d+) kB/.exec(status)?.[1] ?? NaN) / 1024;
-}
-
 /** Sign the demo owner in the way Auth.js stores it: a session row, sent as its cookie. */
 function signIn(dataDir: string): string {
   const db = new Database(path.join(dataDir, 'drainwright.sqlite'));
@@ -159,25 +140,34 @@ function build(): void {
 
 interface Memory {
   cold: number;
-  /** Idle, SETTLE s after the warm-up load stopped. */
-  before: number;
+  /** Idle, SETTLE s after the warm-up load stopped: uncollected, then after a full collection. */
+  before: Reading;
   /** The moment the soak load stopped. */
   end: number;
   /** Idle, SETTLE s after the soak load stopped (same footing as `before`). */
-  after: number;
+  after: Reading;
   /** Sampled every 10 s while loaded. */
   trend: number[];
 }
 
+interface Reading {
+  rss: number;
+  rssCollected: number;
+  heapCollected: number;
+}
+
 function printMemory(m: Memory, pid: number): number {
-  const pct = (x: number): string => `${(((x - m.before) / m.before) * 100).toFixed(1)} %`;
+  const pct = (x: number, base: number): string => `${(((x - base) / base) * 100).toFixed(1)} %`;
   const mib = (x: number): string => `${x.toFixed(1)} MiB`;
-  console.log(`server RSS (pid ${pid}, /proc/${pid}/status VmRSS):`);
-  console.log(`  cold ${mib(m.cold)}; before (idle ${SETTLE} s after warm-up) ${mib(m.before)}`);
-  console.log(`  at the end of the load ${mib(m.end)} (${pct(m.end)})`);
-  console.log(`  after (idle ${SETTLE} s after the soak) ${mib(m.after)} (${pct(m.after)})`);
-  console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB`);
-  return (m.after - m.before) / m.before;
+  const { before: b, after: a } = m;
+  console.log(`server memory (pid ${pid}; RSS from /proc/${pid}/status, heap from its inspector):`);
+  console.log(`  cold RSS ${mib(m.cold)}; RSS at the end of the load ${mib(m.end)}`);
+  console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB RSS`);
+  console.log(`  idle ${SETTLE} s, before → after the soak:`);
+  console.log(`    RSS, uncollected      ${mib(b.rss)} → ${mib(a.rss)} (${pct(a.rss, b.rss)})`);
+  console.log(`    RSS after a full GC   ${mib(b.rssCollected)} → ${mib(a.rssCollected)} (${pct(a.rssCollected, b.rssCollected)})`);
+  console.log(`    heap after a full GC  ${mib(b.heapCollected)} → ${mib(a.heapCollected)} (${pct(a.heapCollected, b.heapCollected)})`);
+  return (a.rssCollected - b.rssCollected) / b.rssCollected;
 }
 
 function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
@@ -198,7 +188,7 @@ function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
   const load = os.loadavg().map((l) => l.toFixed(2));
   console.log(`load avg   ${load.join(' ')} (1, 5, 15 min) on ${os.cpus().length} cores`);
   const ok = errors === 0 && growth < GOAL_GROWTH;
-  console.log(`goals (0 errors, RSS growth < ${GOAL_GROWTH * 100} %): ${ok ? 'met' : 'NOT met'}`);
+  console.log(`goals (0 errors, RSS growth after a full GC < ${GOAL_GROWTH * 100} %): ${ok ? 'met' : 'NOT met'}`);
   return ok;
 }
 
@@ -206,15 +196,21 @@ const idle = (seconds: number): Promise<void> => new Promise((r) => setTimeout(r
 
 async function main(): Promise<void> {
   build();
-  const app = await startApp(PORT, SOAK_ENV);
+  const app = await startApp(PORT, { ...SOAK_ENV, NODE_OPTIONS: `--inspect-port=127.0.0.1:${INSPECT_PORT}` });
   try {
     const pid = serverPid(app.child.pid!);
+    const probe = await openHeapProbe(pid, INSPECT_PORT);
+    const reading = async (): Promise<Reading> => {
+      const rss = rssMiB(pid);
+      const heapCollected = await probe.collect();
+      return { rss, rssCollected: rssMiB(pid), heapCollected };
+    };
     const cookie = signIn(app.dataDir);
     const cold = rssMiB(pid);
     await run(app.url, cookie, WARMUP);
     tally.clear();
     await idle(SETTLE);
-    const before = rssMiB(pid);
+    const before = await reading();
     // A trend, not just two points: a leak climbs steadily, a busy heap saws up and down.
     const trend: number[] = [];
     const sampler = setInterval(() => trend.push(rssMiB(pid)), 10_000);
@@ -222,7 +218,8 @@ async function main(): Promise<void> {
     clearInterval(sampler);
     const end = rssMiB(pid);
     await idle(SETTLE);
-    const memory = { cold, before, end, after: rssMiB(pid), trend };
+    const memory = { cold, before, end, after: await reading(), trend };
+    probe.close();
     process.exitCode = report(result, memory, pid) ? 0 : 1;
   } finally {
     await app.stop();
