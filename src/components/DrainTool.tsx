@@ -50,12 +50,23 @@ type Computed = ReturnType<typeof compute>;
  */
 function useHints(out: Computed, system: UnitSystem) {
   const later = useDeferredValue<Computed | null>(out, null);
-  return useMemo(() => (later && 'r' in later ? drainHints(later.req!, later.r!, later.size!, later.target!, system) : []), [later, system]);
+  return useMemo(
+    () =>
+      later && 'r' in later
+        ? drainHints(later.req!, later.r!, later.size!, later.target!, system)
+        : [],
+    [later, system],
+  );
 }
 
 function figures(r: DrainResult): Figure[] {
   return [
-    { id: 'time', label: 'Time to the stop', kind: 'time', si: r.status === 'no_flow' ? Infinity : r.time_s },
+    {
+      id: 'time',
+      label: 'Time to the stop',
+      kind: 'time',
+      si: r.status === 'no_flow' ? Infinity : r.time_s,
+    },
     { id: 'flow', label: 'Flow at the start', kind: 'flow', si: r.initial_flow_m3_s },
     { id: 'mean-flow', label: 'Average flow', kind: 'flow', si: r.mean_flow_m3_s },
     { id: 'volume', label: 'Water at the start', kind: 'volume', si: r.volume_initial_m3 },
@@ -67,7 +78,14 @@ function figures(r: DrainResult): Figure[] {
 /** The full drain-down tool: every vessel shape, every outlet, the drawdown curve, what would help. */
 export default function DrainTool(): ReactElement {
   const system = useUnitSystem();
-  const { state: s, update, query } = useCalcState<DrainToolState>(DRAIN_TOOL_DEFAULTS, { fittings: FITTING_ROW, stage: STAGE_ROW });
+  const {
+    state: s,
+    update,
+    query,
+  } = useCalcState<DrainToolState>(DRAIN_TOOL_DEFAULTS, {
+    fittings: FITTING_ROW,
+    stage: STAGE_ROW,
+  });
   const out = useMemo(() => compute(s), [s]);
   const hints = useHints(out, system);
   const inputs = (
@@ -82,11 +100,25 @@ export default function DrainTool(): ReactElement {
         <WaterSiteFields s={s} update={update} system={system} />
       </InputGroup>
       <InputGroup title="Time you have (optional)">
-        <NumberField name="target_time_s" label="The job may take" kind="time" system={system} value={s.target_time_s} onChange={(v) => update({ target_time_s: v })} hint="0 for none" />
+        <NumberField
+          name="target_time_s"
+          label="The job may take"
+          kind="time"
+          system={system}
+          value={s.target_time_s}
+          onChange={(v) => update({ target_time_s: v })}
+          hint="0 for none"
+        />
       </InputGroup>
     </>
   );
-  const cautions = ['edges-and-confined-spaces', ...(s.outlet === 'siphon' ? ['no-mouth-priming'] : []), ...(s.outlet !== 'orifice' ? ['intake-entrapment'] : []), 'discharge', 'estimates'];
+  const cautions = [
+    'edges-and-confined-spaces',
+    ...(s.outlet === 'siphon' ? ['no-mouth-priming'] : []),
+    ...(s.outlet !== 'orifice' ? ['intake-entrapment'] : []),
+    'discharge',
+    'estimates',
+  ];
   const result =
     'error' in out ? (
       <InputProblem text={out.error!} />
@@ -97,7 +129,14 @@ export default function DrainTool(): ReactElement {
         <p data-testid="limits">It stops when {STOP_WORDS[out.r.stop_reason]}.</p>
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={cautions} />
-        <ResultActions tool="drain" inputs={out.req} results={out.r} unitSystem={system} path="/drain" query={query} />
+        <ResultActions
+          tool="drain"
+          inputs={out.req}
+          results={out.r}
+          unitSystem={system}
+          path="/drain"
+          query={query}
+        />
         <TankSchematic s={s} system={system} />
         {out.r.status !== 'no_flow' && (
           <ChartPanel

@@ -114,9 +114,11 @@ describe('API v1 over HTTP', () => {
   test('answers 413 to a body over 64 KiB, declared or streamed without a length', async () => {
     const big = JSON.stringify({ pad: 'x'.repeat(70_000) });
     await expectError(await post('/api/v1/line', big), 413, 'payload_too_large');
+    // 400 KiB, so the client is still uploading when the 413 goes out: the server must read on
+    // (and drop) the rest, or the reset connection loses the answer
     const chunks = new ReadableStream<Uint8Array>({
       start(c) {
-        for (let i = 0; i < 20; i++) c.enqueue(new TextEncoder().encode(' '.repeat(4096)));
+        for (let i = 0; i < 100; i++) c.enqueue(new TextEncoder().encode(' '.repeat(4096)));
         c.close();
       },
     });

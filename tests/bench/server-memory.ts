@@ -45,7 +45,10 @@ export async function openHeapProbe(pid: number, port: number): Promise<HeapProb
   let url = '';
   for (let i = 0; i < 50 && !url; i++) {
     url = await fetch(`http://127.0.0.1:${port}/json/list`)
-      .then(async (r) => ((await r.json()) as { webSocketDebuggerUrl: string }[])[0].webSocketDebuggerUrl)
+      .then(
+        async (r) =>
+          ((await r.json()) as { webSocketDebuggerUrl: string }[])[0].webSocketDebuggerUrl,
+      )
       .catch(() => new Promise<string>((r) => setTimeout(() => r(''), 200)));
   }
   if (!url) throw new Error(`the server's inspector did not open on port ${port}`);

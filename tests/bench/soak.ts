@@ -165,8 +165,12 @@ function printMemory(m: Memory, pid: number): number {
   console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB RSS`);
   console.log(`  idle ${SETTLE} s, before → after the soak:`);
   console.log(`    RSS, uncollected      ${mib(b.rss)} → ${mib(a.rss)} (${pct(a.rss, b.rss)})`);
-  console.log(`    RSS after a full GC   ${mib(b.rssCollected)} → ${mib(a.rssCollected)} (${pct(a.rssCollected, b.rssCollected)})`);
-  console.log(`    heap after a full GC  ${mib(b.heapCollected)} → ${mib(a.heapCollected)} (${pct(a.heapCollected, b.heapCollected)})`);
+  console.log(
+    `    RSS after a full GC   ${mib(b.rssCollected)} → ${mib(a.rssCollected)} (${pct(a.rssCollected, b.rssCollected)})`,
+  );
+  console.log(
+    `    heap after a full GC  ${mib(b.heapCollected)} → ${mib(a.heapCollected)} (${pct(a.heapCollected, b.heapCollected)})`,
+  );
   return (a.rssCollected - b.rssCollected) / b.rssCollected;
 }
 
@@ -188,7 +192,9 @@ function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
   const load = os.loadavg().map((l) => l.toFixed(2));
   console.log(`load avg   ${load.join(' ')} (1, 5, 15 min) on ${os.cpus().length} cores`);
   const ok = errors === 0 && growth < GOAL_GROWTH;
-  console.log(`goals (0 errors, RSS growth after a full GC < ${GOAL_GROWTH * 100} %): ${ok ? 'met' : 'NOT met'}`);
+  console.log(
+    `goals (0 errors, RSS growth after a full GC < ${GOAL_GROWTH * 100} %): ${ok ? 'met' : 'NOT met'}`,
+  );
   return ok;
 }
 
@@ -196,7 +202,10 @@ const idle = (seconds: number): Promise<void> => new Promise((r) => setTimeout(r
 
 async function main(): Promise<void> {
   build();
-  const app = await startApp(PORT, { ...SOAK_ENV, NODE_OPTIONS: `--inspect-port=127.0.0.1:${INSPECT_PORT}` });
+  const app = await startApp(PORT, {
+    ...SOAK_ENV,
+    NODE_OPTIONS: `--inspect-port=127.0.0.1:${INSPECT_PORT}`,
+  });
   try {
     const pid = serverPid(app.child.pid!);
     const probe = await openHeapProbe(pid, INSPECT_PORT);

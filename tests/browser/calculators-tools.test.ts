@@ -57,14 +57,24 @@ describe('full calculator tools on a phone', () => {
 
   test('does show the same gravity-line flow as POST /api/v1/line for the same inputs', async () => {
     const page = await (await phoneContext(browser, app.url)).newPage();
-    await openHydrated(page, '/gravity-line?source_level_m=4&length_m=50&size=layflat-hose-3in&temp_c=8');
+    await openHydrated(
+      page,
+      '/gravity-line?source_level_m=4&length_m=50&size=layflat-hose-3in&temp_c=8',
+    );
     const res = await fetch(`${app.url}/api/v1/line`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', origin: app.url },
       body: JSON.stringify({
         fluid: { water_temperature_c: 8 },
         site: { altitude_m: 0 },
-        line: { inner_diameter_m: 0.0762, length_m: 50, material: 'layflat-hose', entrance_k: 1, fittings: [], parallel_lines: 1 },
+        line: {
+          inner_diameter_m: 0.0762,
+          length_m: 50,
+          material: 'layflat-hose',
+          entrance_k: 1,
+          fittings: [],
+          parallel_lines: 1,
+        },
         source_level_m: 4,
         outlet_elevation_m: 0,
       }),
@@ -72,7 +82,9 @@ describe('full calculator tools on a phone', () => {
     expect(res.status).toBe(200);
     const api = (await res.json()) as { flow_m3_s: number; velocity_m_s: number };
     expect(await figure(page, 'flow')).toBe(formatQuantity('flow', api.flow_m3_s, 'metric'));
-    expect(await figure(page, 'velocity')).toBe(formatQuantity('velocity', api.velocity_m_s, 'metric'));
+    expect(await figure(page, 'velocity')).toBe(
+      formatQuantity('velocity', api.velocity_m_s, 'metric'),
+    );
   });
 
   test('does show what would help on the drain-down once the deferred hints render', async () => {
@@ -81,7 +93,9 @@ describe('full calculator tools on a phone', () => {
     const hints = page.getByTestId('hints');
     await hints.waitFor();
     // a one-minute target is far too short for the default basin: the hint says how much more
-    await expect(hints.textContent()).resolves.toMatch(/More time: it needs .+ more than you have\./);
+    await expect(hints.textContent()).resolves.toMatch(
+      /More time: it needs .+ more than you have\./,
+    );
   });
 
   test('does take a good depth–area CSV upload and name the row of a malformed one', async () => {
@@ -90,9 +104,15 @@ describe('full calculator tools on a phone', () => {
     await openHydrated(page, '/drain?shape=stage_table&initial_depth_m=1.2&outlet=orifice');
     const upload = page.getByTestId('stage-upload');
     const good = 'depth (m),area (m2)\n0,10\n0.4,14\n0.8,19\n1.2,25\n';
-    await upload.setInputFiles({ name: 'pond.csv', mimeType: 'text/csv', buffer: Buffer.from(good) });
+    await upload.setInputFiles({
+      name: 'pond.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from(good),
+    });
     // the file is read asynchronously: wait for the table to take it
-    await page.waitForFunction(() => document.querySelector('[data-testid="stage-count"]')?.textContent?.includes('4 levels'));
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="stage-count"]')?.textContent?.includes('4 levels'),
+    );
     // Volume of a table with area linear in depth: trapezoid rule is exact, Σ (A1 + A2)/2·Δh
     // = 0.4·(12 + 16.5 + 22) = 20.2 m³ = 20 200 L.
     expect(await figure(page, 'volume')).toBe('20\u202f200 L');

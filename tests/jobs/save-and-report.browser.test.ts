@@ -24,7 +24,9 @@ describe('save a quick check to a job on a phone', () => {
     const context = await phoneContext(browser, t.app.url);
     // Signed in as the seeded Pro owner through a database session row (what sign-in creates).
     const cookie = t.as('usr_demo_owner').cookie.split('=');
-    await context.addCookies([{ name: cookie[0], value: cookie.slice(1).join('='), url: t.app.url }]);
+    await context.addCookies([
+      { name: cookie[0], value: cookie.slice(1).join('='), url: t.app.url },
+    ]);
     const page = await context.newPage();
     await openHydrated(page, '/check');
     await page.getByRole('button', { name: 'Save to a job' }).click();
@@ -35,7 +37,10 @@ describe('save a quick check to a job on a phone', () => {
     await page.getByTestId('calculation').first().waitFor();
     const width = await page.evaluate(() => document.documentElement.scrollWidth);
     expect(width).toBeLessThanOrEqual(360);
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('job-pdf').click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('job-pdf').click(),
+    ]);
     const file = await download.path();
     expect(fs.readFileSync(file!).subarray(0, 5).toString()).toBe('%PDF-');
     await context.close();

@@ -40,7 +40,7 @@ async function main(): Promise<void> {
   const server = http.createServer((req, res) => {
     const id = trackRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
-    // API v1 caps its own body at 64 KiB, closes on an unread body itself, and its small JSON
+    // API v1 caps its own body at 64 KiB, drains an unread body itself, and its small JSON
     // answers skip compression: it goes first, past the page machinery.
     if (serveApiV1(req, res)) return;
     if (refuseOversizedBody(req, res)) return;

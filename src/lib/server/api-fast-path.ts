@@ -9,7 +9,7 @@ import type http from 'node:http';
 import type { ApiAnswer, ApiRequest, BodyBytes } from '../api/answer';
 import { concatChunks } from '../api/body';
 import { v1Operation } from '../api/v1-routes';
-import { closeIfBodyUnread } from './body-limit';
+import { drainUnreadBody } from './body-limit';
 import { requestIdFor } from './request-id';
 
 function first(header: string | string[] | undefined): string | undefined {
@@ -66,7 +66,7 @@ function send(req: http.IncomingMessage, res: http.ServerResponse, answer: ApiAn
   const body = answer.body === undefined ? undefined : JSON.stringify(answer.body);
   const headers: http.OutgoingHttpHeaders = answer.headers;
   if (body !== undefined) headers['Content-Length'] = Buffer.byteLength(body);
-  closeIfBodyUnread(req, res);
+  drainUnreadBody(req, res);
   res.writeHead(answer.status, headers);
   res.end(body);
 }

@@ -59,13 +59,47 @@ async function* capped(req: http.IncomingMessage, limit: number): AsyncGenerator
   }
 }
 
+/** How long the rest of a refused body may take to arrive before the server hangs up, ms. */
+const DRAIN_MS = 5_000;
+
 /**
- * For an answer written before its request body was read (413, 415, early 4xx): close the
- * connection and drain what arrived, so the client's next request on a keep-alive socket cannot
- * queue behind the rest of that body. Call just before the status line is written.
+ * For a page-server answer written before its request body was read (Astro's early 4xx): close
+ * the connection and drain what arrived, so the client's next request on a keep-alive socket
+ * cannot queue behind the rest of that body. (The body may be held by the capped iterable above,
+ * which tears the socket down when abandoned, so the connection is not kept.) Call just before
+ * the status line is written.
  */
 export function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerResponse): void {
   if (req.complete) return;
   res.setHeader('Connection', 'close');
   res.once('finish', () => req.resume());
+}
+
+/**
+ * For an API v1 answer written before its request body was read (413, 415, early 4xx; the short
+ * path owns the request, nothing else reads it): once the answer is out, read and drop the rest
+ * of the body, so the client gets to read the answer (closing while it still uploads resets the
+ * connection and loses it) and its next request on the keep-alive socket does not queue behind
+ * the unread bytes. A body too big or too slow to drain gets a hang-up. Call just before the
+ * status line is written.
+ */
+export function drainUnreadBody(req: http.IncomingMessage, res: http.ServerResponse): void {
+  if (req.complete) return;
+  if (Number(req.headers['content-length']) > DRAIN_MAX_BYTES) {
+    res.setHeader('Connection', 'close');
+    return;
+  }
+  // taken now: once the answer is out the request may let go of its socket
+  const socket = req.socket;
+  res.once('finish', () => {
+    let bytes = 0;
+    const hangUp = (): void => void socket?.destroy();
+    const timer = setTimeout(hangUp, DRAIN_MS).unref();
+    req.on('data', (chunk: Buffer) => {
+      bytes += chunk.length;
+      if (bytes > DRAIN_MAX_BYTES) hangUp();
+    });
+    req.once('close', () => clearTimeout(timer)).once('end', () => clearTimeout(timer));
+    req.resume();
+  });
 }

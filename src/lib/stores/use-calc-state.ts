@@ -47,7 +47,9 @@ export function useCalcState<T extends ShareState>(
     // defaults are module constants; read the URL once
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
-  const rowKeys = Object.fromEntries(Object.entries(rowTemplates).map(([k, t]) => [k, Object.keys(t)]));
+  const rowKeys = Object.fromEntries(
+    Object.entries(rowTemplates).map(([k, t]) => [k, Object.keys(t)]),
+  );
   const query = encodeShare(state, defaults, rowKeys);
   useEffect(() => {
     if (!loaded) return;
