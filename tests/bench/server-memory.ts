@@ -74,3 +74,40 @@ export async function openHeapProbe(pid: number, port: number): Promise<HeapProb
     close: () => ws.close(),
   };
 }
+
+export interface Memory {
+  cold: number;
+  /** Idle, the settle time after the warm-up load stopped: uncollected, then after a full collection. */
+  before: Reading;
+  /** The moment the soak load stopped. */
+  end: number;
+  /** Idle, the settle time after the soak load stopped (same footing as `before`). */
+  after: Reading;
+  /** Sampled every 10 s while loaded. */
+  trend: number[];
+}
+
+export interface Reading {
+  rss: number;
+  rssCollected: number;
+  heapCollected: number;
+}
+
+/** Print the readings; returns the growth the goal is judged on (RSS after a full GC). */
+export function printMemory(m: Memory, pid: number, settleS: number): number {
+  const pct = (x: number, base: number): string => `${(((x - base) / base) * 100).toFixed(1)} %`;
+  const mib = (x: number): string => `${x.toFixed(1)} MiB`;
+  const { before: b, after: a } = m;
+  console.log(`server memory (pid ${pid}; RSS from /proc/${pid}/status, heap from its inspector):`);
+  console.log(`  cold RSS ${mib(m.cold)}; RSS at the end of the load ${mib(m.end)}`);
+  console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB RSS`);
+  console.log(`  idle ${settleS} s, before → after the soak:`);
+  console.log(`    RSS, uncollected      ${mib(b.rss)} → ${mib(a.rss)} (${pct(a.rss, b.rss)})`);
+  console.log(
+    `    RSS after a full GC   ${mib(b.rssCollected)} → ${mib(a.rssCollected)} (${pct(a.rssCollected, b.rssCollected)})`,
+  );
+  console.log(
+    `    heap after a full GC  ${mib(b.heapCollected)} → ${mib(a.heapCollected)} (${pct(a.heapCollected, b.heapCollected)})`,
+  );
+  return (a.rssCollected - b.rssCollected) / b.rssCollected;
+}

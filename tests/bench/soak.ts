@@ -17,7 +17,8 @@ import Database from 'better-sqlite3';
 import { buildIsStale } from '../../src/lib/commands/build-check';
 import { drainRequest, lineRequest, siphonRequest } from '../api/samples';
 import { startApp } from '../helpers/server';
-import { openHeapProbe, rssMiB, serverPid } from './server-memory';
+import { openHeapProbe, printMemory, rssMiB, serverPid } from './server-memory';
+import type { Memory, Reading } from './server-memory';
 
 const PORT = 18660;
 /** The server's inspector, opened by the bench only to force a collection before a reading. */
@@ -138,42 +139,6 @@ function build(): void {
   }
 }
 
-interface Memory {
-  cold: number;
-  /** Idle, SETTLE s after the warm-up load stopped: uncollected, then after a full collection. */
-  before: Reading;
-  /** The moment the soak load stopped. */
-  end: number;
-  /** Idle, SETTLE s after the soak load stopped (same footing as `before`). */
-  after: Reading;
-  /** Sampled every 10 s while loaded. */
-  trend: number[];
-}
-
-interface Reading {
-  rss: number;
-  rssCollected: number;
-  heapCollected: number;
-}
-
-function printMemory(m: Memory, pid: number): number {
-  const pct = (x: number, base: number): string => `${(((x - base) / base) * 100).toFixed(1)} %`;
-  const mib = (x: number): string => `${x.toFixed(1)} MiB`;
-  const { before: b, after: a } = m;
-  console.log(`server memory (pid ${pid}; RSS from /proc/${pid}/status, heap from its inspector):`);
-  console.log(`  cold RSS ${mib(m.cold)}; RSS at the end of the load ${mib(m.end)}`);
-  console.log(`  every 10 s under load: ${m.trend.map((x) => x.toFixed(0)).join(' ')} MiB RSS`);
-  console.log(`  idle ${SETTLE} s, before → after the soak:`);
-  console.log(`    RSS, uncollected      ${mib(b.rss)} → ${mib(a.rss)} (${pct(a.rss, b.rss)})`);
-  console.log(
-    `    RSS after a full GC   ${mib(b.rssCollected)} → ${mib(a.rssCollected)} (${pct(a.rssCollected, b.rssCollected)})`,
-  );
-  console.log(
-    `    heap after a full GC  ${mib(b.heapCollected)} → ${mib(a.heapCollected)} (${pct(a.heapCollected, b.heapCollected)})`,
-  );
-  return (a.rssCollected - b.rssCollected) / b.rssCollected;
-}
-
 function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
   const errors = r.errors + r.timeouts + r.non2xx;
   const limits = Object.entries(SOAK_ENV).map(([k, v]) => `${k}=${v}`);
@@ -188,7 +153,7 @@ function report(r: autocannon.Result, memory: Memory, pid: number): boolean {
   );
   for (const [kind, t] of tally)
     console.log(`  ${kind.padEnd(34)} ${String(t.n).padStart(7)}  bad ${t.bad}`);
-  const growth = printMemory(memory, pid);
+  const growth = printMemory(memory, pid, SETTLE);
   const load = os.loadavg().map((l) => l.toFixed(2));
   console.log(`load avg   ${load.join(' ')} (1, 5, 15 min) on ${os.cpus().length} cores`);
   const ok = errors === 0 && growth < GOAL_GROWTH;
