@@ -85,10 +85,7 @@ export function closeIfBodyUnread(req: http.IncomingMessage, res: http.ServerRes
  */
 export function drainUnreadBody(req: http.IncomingMessage, res: http.ServerResponse): void {
   if (req.complete) return;
-  if (Number(req.headers['content-length']) > DRAIN_MAX_BYTES) {
-    res.setHeader('Connection', 'close');
-    return;
-  }
+  if (Number(req.headers['content-length']) > DRAIN_MAX_BYTES) return closeIfBodyUnread(req, res);
   // taken now: once the answer is out the request may let go of its socket
   const socket = req.socket;
   res.once('finish', () => {
