@@ -58,7 +58,9 @@ export async function openHeapProbe(pid: number, port: number): Promise<HeapProb
   const waiting = new Map<number, (result: unknown) => void>();
   ws.on('message', (m) => {
     const msg = JSON.parse(String(m)) as { id?: number; result?: unknown };
-    if (msg.id !== undefined) waiting.get(msg.id)?.(msg.result);
+    if (msg.id === undefined) return;
+    waiting.get(msg.id)?.(msg.result);
+    waiting.delete(msg.id);
   });
   const call = <T>(method: string): Promise<T> =>
     new Promise((resolve) => {
