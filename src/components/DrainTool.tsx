@@ -1,24 +1,25 @@
-import { lazy, useDeferredValue, useMemo } from 'react';
+import { lazy, useMemo } from 'react';
 import type { ReactElement } from 'react';
-import { drainHints } from '../lib/calculators/drain-hints';
 import type { DrainToolState } from '../lib/calculators/drain-tool';
 import { DRAIN_TOOL_DEFAULTS, STAGE_ROW, drainToolRequest } from '../lib/calculators/drain-tool';
 import { inputErrorText } from '../lib/calculators/field-names';
 import type { Figure } from '../lib/calculators/quick-result';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { drainVerdict } from '../lib/calculators/verdict';
-import type { DrainResult, UnitSystem } from '../lib/hydraulics';
+import type { DrainResult } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
 import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
 import CautionNotes from './CautionNotes';
 import ChartPanel from './ChartPanel';
+import DrainHints from './DrainHints';
+import type { SolvedDrain } from './DrainHints';
 import DrainOutletFields from './DrainOutletFields';
 import DrawdownTable from './DrawdownTable';
 import FigureList from './FigureList';
 import NumberField from './NumberField';
 import ShareLink from './ShareLink';
 import TankSchematic from './TankSchematic';
-import ToolLayout, { HintList, InputGroup, InputProblem } from './ToolLayout';
+import ToolLayout, { InputGroup, InputProblem } from './ToolLayout';
 import VerdictBanner from './VerdictBanner';
 import VesselFields from './VesselFields';
 import ResultActions from './ResultActions';
@@ -34,29 +35,13 @@ const STOP_WORDS: Record<DrainResult['stop_reason'], string> = {
   siphon_breaks: 'the siphon’s crest pressure reaches its limit',
 };
 
-function compute(s: DrainToolState) {
+function compute(s: DrainToolState): SolvedDrain | { error: string } {
   try {
     const req = drainToolRequest(s);
     return { req, r: solveDrain(req), size: s.size, target: s.target_time_s };
   } catch (e) {
     return { error: inputErrorText(e) };
   }
-}
-type Computed = ReturnType<typeof compute>;
-
-/**
- * The hints run the inverse solvers, as costly as the solve itself: a deferred render, so the
- * result shows (and the page hydrates) first and typing stays quick. None in the static HTML.
- */
-function useHints(out: Computed, system: UnitSystem) {
-  const later = useDeferredValue<Computed | null>(out, null);
-  return useMemo(
-    () =>
-      later && 'r' in later
-        ? drainHints(later.req!, later.r!, later.size!, later.target!, system)
-        : [],
-    [later, system],
-  );
 }
 
 function figures(r: DrainResult): Figure[] {
@@ -87,7 +72,6 @@ export default function DrainTool(): ReactElement {
     stage: STAGE_ROW,
   });
   const out = useMemo(() => compute(s), [s]);
-  const hints = useHints(out, system);
   const inputs = (
     <>
       <InputGroup title="Vessel, basin or pond">
@@ -121,7 +105,7 @@ export default function DrainTool(): ReactElement {
   ];
   const result =
     'error' in out ? (
-      <InputProblem text={out.error!} />
+      <InputProblem text={out.error} />
     ) : (
       <>
         <VerdictBanner verdict={drainVerdict(out.r)} />
@@ -145,7 +129,7 @@ export default function DrainTool(): ReactElement {
             chart={() => <DrawdownChart curve={out.r.curve} system={system} />}
           />
         )}
-        <HintList hints={hints} />
+        <DrainHints solved={out} system={system} />
       </>
     );
   return <ToolLayout inputs={inputs} result={result} footer={<ShareLink query={query} />} />;

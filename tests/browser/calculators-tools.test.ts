@@ -87,15 +87,36 @@ describe('full calculator tools on a phone', () => {
     );
   });
 
-  test('does show what would help on the drain-down once the deferred hints render', async () => {
+  test('does work out what would help on the drain-down in a web worker, live as inputs change', async () => {
     const page = await (await phoneContext(browser, app.url)).newPage();
+    const errors = watchErrors(page);
+    const workers: string[] = [];
+    page.on('worker', (w) => workers.push(w.url()));
     await openHydrated(page, '/drain?outlet=orifice&target_time_s=60');
     const hints = page.getByTestId('hints');
-    await hints.waitFor();
     // a one-minute target is far too short for the default basin: the hint says how much more
-    await expect(hints.textContent()).resolves.toMatch(
-      /More time: it needs .+ more than you have\./,
-    );
+    await expect
+      .poll(() => hints.textContent(), { timeout: 10_000 })
+      .toMatch(/More time: it needs .+ more than you have\./);
+    // a target far beyond the drain-down's time: the next reply says there is time to spare
+    await page.locator('input[name="target_time_s"]').fill('100000');
+    await expect
+      .poll(() => hints.textContent(), { timeout: 10_000 })
+      .toMatch(/It makes your time with .+ to spare\./);
+    // the solvers ran off the main thread (a failed worker would fall back silently)
+    expect(workers.filter((url) => /drain-hints\.worker/.test(url))).toHaveLength(1);
+    expect(errors).toEqual([]);
+  });
+
+  test('does still show the drain-down hints when the worker script cannot load', async () => {
+    const page = await (await phoneContext(browser, app.url)).newPage();
+    // as when a page cached offline asks for a worker script it never fetched; late, so the
+    // jobs already sent to the worker are the ones that must be worked out again
+    await page.route(/drain-hints\.worker/, (route) => setTimeout(() => void route.abort(), 1500));
+    await openHydrated(page, '/drain?outlet=orifice&target_time_s=60');
+    await expect
+      .poll(() => page.getByTestId('hints').textContent(), { timeout: 10_000 })
+      .toMatch(/More time: it needs .+ more than you have\./);
   });
 
   test('does take a good depth–area CSV upload and name the row of a malformed one', async () => {
