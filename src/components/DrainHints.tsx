@@ -13,11 +13,18 @@ export interface SolvedDrain {
   target: number;
 }
 
+/** The latest hints and the inputs they answer. */
+interface Answer {
+  hints: Hint[];
+  for?: SolvedDrain;
+  system?: UnitSystem;
+}
+
 /**
  * "What would help" for the drain-down. The inverse solvers cost several solves, so they run in
  * a web worker (drain-hints-client.ts) after the result is shown; until the first reply there
- * are none (nor in the static HTML), and a change of inputs keeps the last ones until the new
- * ones arrive.
+ * are none (nor in the static HTML). When the inputs change, the last hints stay, marked as
+ * updating, until the new ones arrive: no flicker, and no old advice passed off as current.
  */
 export default function DrainHints({
   solved,
@@ -26,7 +33,14 @@ export default function DrainHints({
   solved: SolvedDrain;
   system: UnitSystem;
 }): ReactElement | null {
-  const [hints, setHints] = useState<Hint[]>([]);
-  useEffect(() => requestDrainHints({ ...solved, system }, setHints), [solved, system]);
-  return <HintList hints={hints} />;
+  const [answer, setAnswer] = useState<Answer>({ hints: [] });
+  useEffect(
+    () =>
+      requestDrainHints({ ...solved, system }, (hints) =>
+        setAnswer({ hints, for: solved, system }),
+      ),
+    [solved, system],
+  );
+  const current = answer.for === solved && answer.system === system;
+  return <HintList hints={answer.hints} busy={!current} />;
 }

@@ -98,11 +98,24 @@ describe('full calculator tools on a phone', () => {
     await expect
       .poll(() => hints.textContent(), { timeout: 10_000 })
       .toMatch(/More time: it needs .+ more than you have\./);
+    // record the section's busy flag: the old hints are marked as updating until the reply
+    const section = page.getByRole('region', { name: 'What would help' });
+    await section.evaluate((el) => {
+      const seen: (string | null)[] = [];
+      (window as unknown as { __busy: typeof seen }).__busy = seen;
+      new MutationObserver(() => seen.push(el.getAttribute('aria-busy'))).observe(el, {
+        attributes: true,
+        attributeFilter: ['aria-busy'],
+      });
+    });
     // a target far beyond the drain-down's time: the next reply says there is time to spare
     await page.locator('input[name="target_time_s"]').fill('100000');
     await expect
       .poll(() => hints.textContent(), { timeout: 10_000 })
       .toMatch(/It makes your time with .+ to spare\./);
+    await expect.poll(() => section.getAttribute('aria-busy')).toBe('false');
+    const busy = await page.evaluate(() => (window as unknown as { __busy: string[] }).__busy);
+    expect(busy).toContain('true');
     // the solvers ran off the main thread (a failed worker would fall back silently)
     expect(workers.filter((url) => /drain-hints\.worker/.test(url))).toHaveLength(1);
     expect(errors).toEqual([]);
