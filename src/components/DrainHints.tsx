@@ -1,17 +1,13 @@
 import { useEffect, useState } from 'react';
 import type { ReactElement } from 'react';
 import { requestDrainHints } from '../lib/calculators/drain-hints-client';
+import type { DrainHintsJob } from '../lib/calculators/drain-hints';
 import type { Hint } from '../lib/calculators/hints';
-import type { DrainRequest, DrainResult, UnitSystem } from '../lib/hydraulics';
+import type { UnitSystem } from '../lib/hydraulics';
 import { HintList } from './ToolLayout';
 
 /** One solved drain-down: what the hints' inverse solvers start from. */
-export interface SolvedDrain {
-  req: DrainRequest;
-  r: DrainResult;
-  size: string;
-  target: number;
-}
+export type SolvedDrain = Omit<DrainHintsJob, 'system'>;
 
 /** The latest hints and the inputs they answer. */
 interface Answer {

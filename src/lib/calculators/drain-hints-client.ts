@@ -1,65 +1,62 @@
 /**
- * The page side of drain-hints.worker.ts: one shared worker per page, jobs matched to replies by
- * id. Where a worker cannot start or fails to load (an old browser, a script blocked or missing
- * offline), the hints are worked out on the main thread in a later task instead.
+ * The page side of drain-hints.worker.ts: one shared worker per page and one job in it at a
+ * time. Jobs asked for meanwhile wait here, and those cancelled while waiting (inputs changed
+ * again while typing) are never sent, so the latest inputs' reply is not held up behind stale
+ * ones. Where a worker cannot start or fails to load (an old browser, a script blocked or
+ * missing offline), the hints are worked out on the main thread in a later task instead.
  */
-import type { DrainRequest, DrainResult, UnitSystem } from '../hydraulics';
+import type { DrainHintsJob } from './drain-hints';
 import type { Hint } from './hints';
 
-export interface DrainHintsJob {
-  id: number;
-  req: DrainRequest;
-  r: DrainResult;
-  size: string;
-  target: number;
-  system: UnitSystem;
+interface Pending {
+  job: DrainHintsJob;
+  live: () => boolean;
+  reply: (hints: Hint[]) => void;
 }
-export interface DrainHintsReply {
-  id: number;
-  hints: Hint[];
-}
-
-type Pending = { job: DrainHintsJob; reply: (hints: Hint[]) => void };
 
 let worker: Worker | null | undefined;
-let nextId = 1;
-const pending = new Map<number, Pending>();
+let inFlight: Pending | null = null;
+const waiting: Pending[] = [];
 
 /** The fallback, its solvers fetched only when it is needed. */
 function onMainThread({ job, reply }: Pending): void {
   import('./drain-hints').then(
-    ({ drainHints }) => {
-      let hints: Hint[] = [];
-      try {
-        hints = drainHints(job.req, job.r, job.size, job.target, job.system);
-      } catch {
-        // as in the worker: no hints for a job the solvers cannot take
-      }
-      reply(hints);
-    },
+    ({ hintsForJob }) => reply(hintsForJob(job)),
     () => reply([]),
   );
+}
+
+function sendNext(w: Worker): void {
+  while (!inFlight && waiting.length > 0) {
+    const next = waiting.shift()!;
+    if (!next.live()) continue;
+    inFlight = next;
+    w.postMessage(next.job);
+  }
 }
 
 /** The worker failed: everything still waiting on it is worked out here instead. */
 function giveUpOnWorker(): void {
   worker?.terminate();
   worker = null;
-  const waiting = [...pending.values()];
-  pending.clear();
-  waiting.forEach(onMainThread);
+  const left = [...(inFlight ? [inFlight] : []), ...waiting];
+  inFlight = null;
+  waiting.length = 0;
+  left.forEach(onMainThread);
 }
 
 function hintsWorker(): Worker | null {
   if (worker !== undefined) return worker;
   try {
-    worker = new Worker(new URL('./drain-hints.worker.ts', import.meta.url), { type: 'module' });
-    worker.onmessage = (e: MessageEvent<DrainHintsReply>) => {
-      const job = pending.get(e.data.id);
-      pending.delete(e.data.id);
-      job?.reply(e.data.hints);
+    const w = new Worker(new URL('./drain-hints.worker.ts', import.meta.url), { type: 'module' });
+    w.onmessage = (e: MessageEvent<Hint[]>) => {
+      const done = inFlight;
+      inFlight = null;
+      done?.reply(e.data);
+      sendNext(w);
     };
-    worker.onerror = giveUpOnWorker;
+    w.onerror = giveUpOnWorker;
+    worker = w;
   } catch {
     worker = null;
   }
@@ -71,18 +68,15 @@ function hintsWorker(): Worker | null {
  * cancel function is called first (the inputs changed and a newer job is on its way).
  */
 export function requestDrainHints(
-  job: Omit<DrainHintsJob, 'id'>,
+  job: DrainHintsJob,
   onHints: (hints: Hint[]) => void,
 ): () => void {
   let live = true;
-  const entry: Pending = {
-    job: { ...job, id: nextId++ },
-    reply: (hints) => live && onHints(hints),
-  };
+  const entry: Pending = { job, live: () => live, reply: (hints) => live && onHints(hints) };
   const w = hintsWorker();
   if (w) {
-    pending.set(entry.job.id, entry);
-    w.postMessage(entry.job);
+    waiting.push(entry);
+    sendNext(w);
   } else onMainThread(entry);
   return () => {
     live = false;

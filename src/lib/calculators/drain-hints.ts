@@ -71,3 +71,21 @@ export function drainHints(req: DrainRequest, r: DrainResult, sizeId: string, ta
   if (target > 0 && r.status !== 'no_flow') out.push(...targetHints(req, r, target, sizeId, sys));
   return out;
 }
+
+/** One job for the hints, as the page hands it to the worker (or works it out itself). */
+export interface DrainHintsJob {
+  req: DrainRequest;
+  r: DrainResult;
+  size: string;
+  target: number;
+  system: UnitSystem;
+}
+
+/** The hints for one job; none where the solvers cannot take it (extras: the result stands). */
+export function hintsForJob({ req, r, size, target, system }: DrainHintsJob): Hint[] {
+  try {
+    return drainHints(req, r, size, target, system);
+  } catch {
+    return [];
+  }
+}

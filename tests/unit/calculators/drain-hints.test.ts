@@ -1,4 +1,4 @@
-import { describe, expect, test } from 'vitest';
+import { describe, expect, test, vi } from 'vitest';
 import { drainHints } from '../../../src/lib/calculators/drain-hints';
 import { requestDrainHints } from '../../../src/lib/calculators/drain-hints-client';
 import type { Hint } from '../../../src/lib/calculators/hints';
@@ -67,5 +67,44 @@ describe('requestDrainHints', () => {
     cancel();
     await new Promise<Hint[]>((resolve) => requestDrainHints(job, resolve));
     expect(replies).toEqual([]);
+  });
+
+  test('does keep one job in the worker and never send one cancelled while it waited', async () => {
+    // a stand-in for the browser's Worker, so the queue can be watched (the real one is covered
+    // by the browser tests)
+    const posted: unknown[] = [];
+    const made: QueueWorker[] = [];
+    class QueueWorker {
+      onmessage: ((e: { data: Hint[] }) => void) | null = null;
+      onerror: (() => void) | null = null;
+      constructor() {
+        made.push(this);
+      }
+      postMessage(job: unknown): void {
+        posted.push(job);
+      }
+      terminate(): void {}
+    }
+    vi.stubGlobal('Worker', QueueWorker);
+    vi.resetModules();
+    try {
+      const client = await import('../../../src/lib/calculators/drain-hints-client');
+      const got: string[] = [];
+      const [a, b, c] = [1, 2, 3].map((target) => ({ ...job, target }));
+      client.requestDrainHints(a!, () => got.push('a'));
+      const cancelB = client.requestDrainHints(b!, () => got.push('b'));
+      client.requestDrainHints(c!, () => got.push('c'));
+      expect(posted).toEqual([a]); // b and c wait for a's reply
+      cancelB();
+      made[0]!.onmessage!({ data: [] }); // a answered: b was cancelled, so c goes next
+      expect(got).toEqual(['a']);
+      expect(posted).toEqual([a, c]);
+      made[0]!.onmessage!({ data: [] });
+      expect(got).toEqual(['a', 'c']);
+      expect(made).toHaveLength(1);
+    } finally {
+      vi.unstubAllGlobals();
+      vi.resetModules();
+    }
   });
 });
