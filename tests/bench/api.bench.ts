@@ -1,7 +1,7 @@
 /**
  * API speed goals (`npm run bench:api`; not part of the test suite). Builds when stale, starts the
  * real built app (rate limit lifted with CALC_RATE_LIMIT_PER_MINUTE=0) and a bare node:http server
- * answering fixed JSON, then loads each with autocannon: 20 connections, 10 s. Goals: the app's
+ * answering fixed JSON, then loads each with autocannon: 20 connections, 2 s to warm up, then 10 s. Goals: the app's
  * POST /api/v1/siphon at least 50 % of the bare server's requests per second, p99 ≤ 50 ms, no errors.
  */
 import autocannon from 'autocannon';
@@ -34,11 +34,11 @@ interface Figures {
   errors: number;
 }
 
-async function load(url: string): Promise<Figures> {
+async function load(url: string, seconds = SECONDS): Promise<Figures> {
   const r = await autocannon({
     url,
     connections: 20,
-    duration: SECONDS,
+    duration: seconds,
     method: 'POST',
     headers: { 'content-type': 'application/json' },
     body: siphonBody,
@@ -69,11 +69,20 @@ async function main(): Promise<void> {
   }
   // Production's info level: one access-log line per request, written to a file, not to us.
   const logFile = path.join(os.tmpdir(), `dw-bench-api-${process.pid}.log`);
-  const app = await startApp(APP_PORT, { CALC_RATE_LIMIT_PER_MINUTE: '0', LOG_LEVEL: 'info' }, logFile);
+  const app = await startApp(
+    APP_PORT,
+    { CALC_RATE_LIMIT_PER_MINUTE: '0', LOG_LEVEL: 'info' },
+    logFile,
+  );
   const bare = await bareServer();
   try {
-    const floor = await load(`http://127.0.0.1:${BARE_PORT}/`);
-    const siphon = await load(`${app.url}/api/v1/siphon`);
+    // Each server is warmed up first (2 s, not counted), so its JIT-compiled code is measured.
+    const floor = await load(`http://127.0.0.1:${BARE_PORT}/`, 2).then(() =>
+      load(`http://127.0.0.1:${BARE_PORT}/`),
+    );
+    const siphon = await load(`${app.url}/api/v1/siphon`, 2).then(() =>
+      load(`${app.url}/api/v1/siphon`),
+    );
     const ratio = siphon.rps / floor.rps;
     const row = (name: string, f: Figures): string =>
       `${name.padEnd(26)} ${f.rps.toFixed(0).padStart(8)} req/s   p99 ${String(f.p99).padStart(4)} ms   errors ${f.errors}`;

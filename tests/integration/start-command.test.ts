@@ -25,7 +25,7 @@ describe('npm start', () => {
   });
 
   test('sends the security headers on pages, static files and API answers', async () => {
-    for (const route of ['/', '/favicon.svg', '/api/health', '/no-such-page']) {
+    for (const route of ['/', '/favicon.svg', '/api/health', '/api/v1/water', '/no-such-page']) {
       const res = await fetch(`${app.url}${route}`);
       expect(res.headers.get('x-content-type-options'), route).toBe('nosniff');
       expect(res.headers.get('content-security-policy'), route).toContain("frame-ancestors 'none'");
@@ -44,7 +44,9 @@ describe('npm start', () => {
 
   test('creates the database, keeps a generated auth secret and prints the demo sign-ins', () => {
     expect(fs.existsSync(path.join(app.dataDir, 'drainwright.sqlite'))).toBe(true);
-    expect(fs.readFileSync(path.join(app.dataDir, 'auth-secret'), 'utf8').length).toBeGreaterThan(30);
+    expect(fs.readFileSync(path.join(app.dataDir, 'auth-secret'), 'utf8').length).toBeGreaterThan(
+      30,
+    );
     expect(app.output()).toContain('rosa@heronsgate.example');
     expect(app.output()).toContain('demo data seeded');
   });
@@ -53,13 +55,17 @@ describe('npm start', () => {
     // npm itself dies of the signal; what matters is that nothing it started keeps running.
     await app.stop('SIGINT');
     await new Promise((r) => setTimeout(r, 1500));
-    await expect(fetch(`${app.url}/api/health`, { signal: AbortSignal.timeout(1000) })).rejects.toThrow();
+    await expect(
+      fetch(`${app.url}/api/health`, { signal: AbortSignal.timeout(1000) }),
+    ).rejects.toThrow();
   });
 
   test('stops everything when only npm is sent SIGTERM', async () => {
     const second = await startApp(17902);
     second.child.kill('SIGTERM');
     await new Promise((r) => setTimeout(r, 2500));
-    await expect(fetch(`${second.url}/api/health`, { signal: AbortSignal.timeout(1000) })).rejects.toThrow();
+    await expect(
+      fetch(`${second.url}/api/health`, { signal: AbortSignal.timeout(1000) }),
+    ).rejects.toThrow();
   });
 });

@@ -19,6 +19,7 @@ export type BodyResult = { ok: true; value: unknown } | { ok: false; answer: Api
 /** application/json or any application/…+json, in UTF-8 (the only charset JSON allows). */
 export function isJsonContentType(header: string | null): boolean {
   if (!header) return false;
+  if (header === 'application/json') return true; // the usual case, without the parsing below
   const [type, ...params] = header.split(';').map((s) => s.trim().toLowerCase());
   if (type !== 'application/json' && !/^application\/[\w.-]+\+json$/.test(type)) return false;
   return params.every((p) => !p.startsWith('charset=') || /^charset="?utf-8"?$/.test(p));
@@ -28,6 +29,9 @@ const UNREAD: Record<'unreadable' | 'late', string> = {
   unreadable: 'the body could not be read in full',
   late: 'the body did not arrive in time',
 };
+
+/** One strict decoder for every body: decode() without streaming keeps no state between calls. */
+const UTF8 = new TextDecoder('utf-8', { fatal: true });
 
 function refuse(answer: ApiAnswer): BodyResult {
   return { ok: false, answer };
@@ -47,7 +51,7 @@ export async function readJsonBody(request: ApiRequest): Promise<BodyResult> {
   }
   let text: string;
   try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(read.bytes);
+    text = UTF8.decode(read.bytes);
   } catch {
     return refuse(invalidBody('the body is not valid UTF-8'));
   }

@@ -36,13 +36,15 @@ async function main(): Promise<void> {
   const entry = pathToFileURL(path.resolve('dist/server/entry.mjs')).href;
   const { handler } = (await import(entry)) as { handler: Handler };
   const headers = Object.entries(securityHeaders(config.production));
+  const flatHeaders = headers.flat();
 
   const server = http.createServer((req, res) => {
+    // API v1 gives each request its id and log line, caps its own body at 64 KiB, drains an
+    // unread body itself, and its small JSON answers skip compression: it goes first, past the
+    // page machinery.
+    if (serveApiV1(req, res, flatHeaders)) return;
     const id = trackRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
-    // API v1 caps its own body at 64 KiB, drains an unread body itself, and its small JSON
-    // answers skip compression: it goes first, past the page machinery.
-    if (serveApiV1(req, res)) return;
     if (refuseOversizedBody(req, res)) return;
     closeOnUnreadBody(req, res);
     compress(req, res, () => runWithRequestId(id, () => handler(req, res)));

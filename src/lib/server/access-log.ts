@@ -3,18 +3,19 @@ import { logger } from './logger';
 import { logPath } from './redact';
 import { requestIdFor } from './request-id';
 
-/**
- * Give a request its id (the caller's sane X-Request-Id or a new UUID), pass it on to Astro in
- * the request headers (the middleware puts it in locals), return it on the response, and write
- * one access-log line when the response is done: method, path (no query), status, duration in
- * ms and whether the client went away first. 5xx log at error, 4xx at warn, the rest at info.
- */
-export function trackRequest(req: http.IncomingMessage, res: http.ServerResponse): string {
-  const started = performance.now();
+/** The request's id: the caller's sane X-Request-Id or a new UUID. */
+export function requestIdOf(req: http.IncomingMessage): string {
   const given = req.headers['x-request-id'];
-  const id = requestIdFor(Array.isArray(given) ? given[0] : given);
-  req.headers['x-request-id'] = id;
-  res.setHeader('X-Request-Id', id);
+  return requestIdFor(Array.isArray(given) ? given[0] : given);
+}
+
+/**
+ * Write one access-log line when the response is done: method, path (no query), status,
+ * duration in ms and whether the client went away first. 5xx log at error, 4xx at warn, the
+ * rest at info.
+ */
+export function logWhenDone(req: http.IncomingMessage, res: http.ServerResponse, id: string): void {
+  const started = performance.now();
   res.once('close', () => {
     const status = res.statusCode;
     const line = {
@@ -29,5 +30,16 @@ export function trackRequest(req: http.IncomingMessage, res: http.ServerResponse
     else if (status >= 400) logger.warn(line, 'request');
     else logger.info(line, 'request');
   });
+}
+
+/**
+ * Give a page request its id, pass it on to Astro in the request headers (the middleware puts
+ * it in locals), return it on the response, and log the request when done.
+ */
+export function trackRequest(req: http.IncomingMessage, res: http.ServerResponse): string {
+  const id = requestIdOf(req);
+  req.headers['x-request-id'] = id;
+  res.setHeader('X-Request-Id', id);
+  logWhenDone(req, res, id);
   return id;
 }
