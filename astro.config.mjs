@@ -5,6 +5,7 @@ import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import auth from 'auth-astro';
 import { fileURLToPath } from 'node:url';
+import { compileHints } from './src/lib/build/compile-hints.ts';
 import { offlineCheck } from './src/lib/offline/integration.ts';
 import { CSP_DIRECTIVES } from './src/lib/server/security-headers.ts';
 
@@ -42,6 +43,7 @@ export default defineConfig({
     port: Number(process.env.PORT) || 4321,
   },
   vite: {
-    plugins: [tailwindcss()],
+    // compileHints: the browser compiles the start-up scripts off the main thread (see its file).
+    plugins: [tailwindcss(), compileHints()],
   },
 });
