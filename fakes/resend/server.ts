@@ -10,6 +10,7 @@ import { attachmentResource, emailResource, parseSend } from './api';
 import type { ApiError } from './api';
 import { inboxPage, messagePage, notFoundPage } from './inbox';
 import { EmailStore } from './store';
+import { exitWithParent } from '../exit-with-parent';
 
 const port = Number(process.env.PORT) || 4610;
 const host = process.env.HOST || '127.0.0.1';
@@ -42,14 +43,22 @@ async function handleApi(req: http.IncomingMessage, url: URL): Promise<Reply | n
   if (parts[0] !== 'emails') return null;
   const raw = parts.length === 5 && parts[2] === 'attachments' && parts[4] === 'raw';
   if (!raw && !authorised(req)) {
-    return error({ statusCode: 401, name: 'missing_api_key', message: 'Missing API key in the authorization header.' });
+    return error({
+      statusCode: 401,
+      name: 'missing_api_key',
+      message: 'Missing API key in the authorization header.',
+    });
   }
   if (req.method === 'POST' && parts.length === 1) {
     let body: unknown;
     try {
       body = await readJson(req);
     } catch {
-      return error({ statusCode: 400, name: 'invalid_body', message: 'The body is not valid JSON.' });
+      return error({
+        statusCode: 400,
+        name: 'invalid_body',
+        message: 'The body is not valid JSON.',
+      });
     }
     const parsed = parseSend(body);
     if ('statusCode' in parsed) return error(parsed);
@@ -57,11 +66,15 @@ async function handleApi(req: http.IncomingMessage, url: URL): Promise<Reply | n
     console.log(`fake-resend: "${saved.subject}" to ${saved.to.join(', ')}`);
     return { status: 200, json: { id: saved.id } };
   }
-  if (req.method !== 'GET') return error({ statusCode: 405, name: 'method_not_allowed', message: 'Method not allowed.' });
+  if (req.method !== 'GET')
+    return error({ statusCode: 405, name: 'method_not_allowed', message: 'Method not allowed.' });
   if (parts.length === 1) {
     const data = store.list(url.searchParams.get('to') ?? undefined).map(emailResource);
     const limit = Math.min(Number(url.searchParams.get('limit')) || 100, 100);
-    return { status: 200, json: { object: 'list', has_more: data.length > limit, data: data.slice(0, limit) } };
+    return {
+      status: 200,
+      json: { object: 'list', has_more: data.length > limit, data: data.slice(0, limit) },
+    };
   }
   const email = store.get(parts[1]);
   const missing = error({ statusCode: 404, name: 'not_found', message: 'Email not found.' });
@@ -70,16 +83,25 @@ async function handleApi(req: http.IncomingMessage, url: URL): Promise<Reply | n
   if (parts[2] !== 'attachments') return missing;
   const base = `http://${req.headers.host}`;
   if (parts.length === 3) {
-    return { status: 200, json: { object: 'list', has_more: false, data: email.attachments.map((a) => attachmentResource(email.id, a, base)) } };
+    return {
+      status: 200,
+      json: {
+        object: 'list',
+        has_more: false,
+        data: email.attachments.map((a) => attachmentResource(email.id, a, base)),
+      },
+    };
   }
   const file = email.attachments.find((a) => a.id === parts[3]);
   if (!file) return missing;
-  if (raw) return { status: 200, bytes: Buffer.from(file.content, 'base64'), type: file.contentType };
+  if (raw)
+    return { status: 200, bytes: Buffer.from(file.content, 'base64'), type: file.contentType };
   return { status: 200, json: attachmentResource(email.id, file, base) };
 }
 
 function handlePages(url: URL): Reply {
-  if (url.pathname === '/health') return { status: 200, json: { ok: true, service: 'fake-resend' } };
+  if (url.pathname === '/health')
+    return { status: 200, json: { ok: true, service: 'fake-resend' } };
   if (url.pathname === '/') {
     const to = url.searchParams.get('to') ?? '';
     return { status: 200, html: inboxPage(store.list(to || undefined), to) };
@@ -107,8 +129,14 @@ const server = http.createServer((req, res) => {
   const url = new URL(req.url ?? '/', 'http://fake.local');
   handleApi(req, url)
     .then((reply) => send(res, reply ?? handlePages(url)))
-    .catch(() => send(res, { status: 500, json: { statusCode: 500, name: 'internal_server_error', message: 'Fake failed.' } }));
+    .catch(() =>
+      send(res, {
+        status: 500,
+        json: { statusCode: 500, name: 'internal_server_error', message: 'Fake failed.' },
+      }),
+    );
 });
 
 server.listen(port, host, () => console.log(`fake-resend listening on http://${host}:${port}`));
 for (const signal of ['SIGTERM', 'SIGINT'] as const) process.on(signal, () => process.exit(0));
+exitWithParent(() => process.exit(0));
