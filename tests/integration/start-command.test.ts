@@ -64,8 +64,11 @@ describe('npm start', () => {
     const second = await startApp(17902);
     second.child.kill('SIGTERM');
     await new Promise((r) => setTimeout(r, 2500));
-    await expect(
-      fetch(`${second.url}/api/health`, { signal: AbortSignal.timeout(1000) }),
-    ).rejects.toThrow();
+    // The app and its fakes (e-mail on PORT+10000, payments on PORT+12000) are all gone.
+    for (const url of [second.url, 'http://127.0.0.1:27902', 'http://127.0.0.1:29902']) {
+      await expect(
+        fetch(`${url}/api/health`, { signal: AbortSignal.timeout(1000) }),
+      ).rejects.toThrow();
+    }
   });
 });
