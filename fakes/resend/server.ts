@@ -10,7 +10,7 @@ import { attachmentResource, emailResource, parseSend } from './api';
 import type { ApiError } from './api';
 import { inboxPage, messagePage, notFoundPage } from './inbox';
 import { EmailStore } from './store';
-import { exitWithParent } from '../exit-with-parent';
+import { whenParentExits } from '../../src/lib/commands/parent-watch';
 
 const port = Number(process.env.PORT) || 4610;
 const host = process.env.HOST || '127.0.0.1';
@@ -139,4 +139,4 @@ const server = http.createServer((req, res) => {
 
 server.listen(port, host, () => console.log(`fake-resend listening on http://${host}:${port}`));
 for (const signal of ['SIGTERM', 'SIGINT'] as const) process.on(signal, () => process.exit(0));
-exitWithParent(() => process.exit(0));
+whenParentExits(() => process.exit(0));

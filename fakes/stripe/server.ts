@@ -17,7 +17,7 @@ import { page } from './html';
 import { checkoutPage, invoicePage, portalPage } from './pages';
 import { Store } from './store';
 import { Deliveries } from './webhooks';
-import { exitWithParent } from '../exit-with-parent';
+import { whenParentExits } from '../../src/lib/commands/parent-watch';
 
 const port = Number(process.env.PORT || 4620);
 const host = process.env.HOST || '127.0.0.1';
@@ -124,5 +124,5 @@ const stop = (): void => {
   setTimeout(() => process.exit(0), 2000).unref();
 };
 process.on('SIGTERM', stop);
-exitWithParent(stop);
 process.on('SIGINT', stop);
+whenParentExits(stop);

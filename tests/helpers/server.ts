@@ -61,3 +61,12 @@ async function waitFor(url: string, child: ChildProcess, log: () => string): Pro
   }
   throw new Error(`app did not answer ${url}:\n${log()}`);
 }
+
+/** True when `url` answers 2xx within `timeoutMs`; false on any error or refusal. */
+export async function answers(url: string, timeoutMs = 1000): Promise<boolean> {
+  try {
+    return (await fetch(url, { signal: AbortSignal.timeout(timeoutMs) })).ok;
+  } catch {
+    return false;
+  }
+}

@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, test } from 'vitest';
+import { answers } from '../helpers/server';
 
 /** True while a process with this pid exists. */
 function alive(pid: number): boolean {
@@ -21,14 +22,6 @@ async function until(check: () => Promise<boolean> | boolean, ms: number): Promi
     await new Promise((r) => setTimeout(r, 100));
   }
   return false;
-}
-
-async function answers(url: string): Promise<boolean> {
-  try {
-    return (await fetch(url, { signal: AbortSignal.timeout(500) })).ok;
-  } catch {
-    return false;
-  }
 }
 
 describe('a fake whose starter is killed outright', () => {
@@ -58,10 +51,12 @@ describe('a fake whose starter is killed outright', () => {
         starter.stdout.once('data', (d) => resolve(Number(String(d).trim()))),
       );
       try {
-        expect(await until(() => answers(`http://127.0.0.1:${port}/health`), 20_000)).toBe(true);
+        expect(await until(() => answers(`http://127.0.0.1:${port}/health`, 500), 20_000)).toBe(
+          true,
+        );
         starter.kill('SIGKILL');
         expect(await until(() => !alive(pid), 5000)).toBe(true);
-        expect(await answers(`http://127.0.0.1:${port}/health`)).toBe(false);
+        expect(await answers(`http://127.0.0.1:${port}/health`, 500)).toBe(false);
       } finally {
         if (alive(pid)) process.kill(pid, 'SIGKILL');
       }

@@ -1,16 +1,9 @@
 import path from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { startFakes } from '../../fakes/runner';
+import { answers } from '../helpers/server';
 
 const dummy = path.resolve('tests/fixtures/fakes/dummy.ts');
-
-async function answers(url: string): Promise<boolean> {
-  try {
-    return (await fetch(url, { signal: AbortSignal.timeout(1000) })).ok;
-  } catch {
-    return false;
-  }
-}
 
 describe('startFakes', () => {
   test('starts a fake, waits until it answers, and stops it', async () => {

@@ -12,6 +12,7 @@ import { getConfig } from '../config';
 import { openDatabase } from '../db/client';
 import { prepareDatabase } from '../db/setup';
 import { buildIsStale } from './build-check';
+import { whenParentExits } from './parent-watch';
 import { ensureAuthSecret } from './secret';
 import { bundleServer } from './server-bundle';
 import { serviceEnv } from './service-env';
@@ -35,7 +36,7 @@ async function shutdown(code: number): Promise<never> {
 async function main(): Promise<void> {
   process.on('SIGINT', () => void shutdown(0));
   process.on('SIGTERM', () => void shutdown(0));
-  watchParent();
+  whenParentExits(() => void shutdown(0));
   const config = getConfig();
   process.env.ASTRO_TELEMETRY_DISABLED = '1';
   process.env.AUTH_SECRET = ensureAuthSecret(config.dataDir);
@@ -68,13 +69,6 @@ async function main(): Promise<void> {
  * npm does not always pass SIGTERM on to the script it runs; when whoever started us goes away
  * (we are re-parented), stop too rather than leave the server and fakes orphaned.
  */
-function watchParent(): void {
-  const parent = process.ppid;
-  setInterval(() => {
-    if (process.ppid !== parent) void shutdown(0);
-  }, 500).unref();
-}
-
 /** Track a child so shutdown stops it; resolves with its exit code. */
 function supervise(child: ChildProcess): Promise<number | null> {
   const exited = new Promise<number | null>((resolve) =>
