@@ -3,7 +3,7 @@
  * enforced while they stream in (413, the rest is never buffered), then the nesting depth, and
  * only then JSON.parse (400 for anything that is not a JSON document).
  */
-import type { ApiAnswer, ApiRequest } from './answer';
+import type { ApiAnswer, ApiRequest, BodyBytes } from './answer';
 import { invalidBody, payloadTooLarge, unsupportedMediaType } from './errors';
 import { withinDepth } from './json-depth';
 
@@ -37,14 +37,17 @@ function refuse(answer: ApiAnswer): BodyResult {
   return { ok: false, answer };
 }
 
-/** Read and parse the request's JSON body, or the error answer to send instead. */
-export async function readJsonBody(request: ApiRequest): Promise<BodyResult> {
-  if (!isJsonContentType(request.header('content-type'))) return refuse(unsupportedMediaType());
+/** The answer refusing the body from its headers alone (wrong type, declared too large), or null. */
+function refusedByHeaders(request: ApiRequest): ApiAnswer | null {
+  if (!isJsonContentType(request.header('content-type'))) return unsupportedMediaType();
   const declared = Number(request.header('content-length'));
-  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) {
-    return refuse(payloadTooLarge(MAX_BODY_BYTES));
-  }
-  const read = await request.readBody(MAX_BODY_BYTES, BODY_DEADLINE_MS);
+  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES)
+    return payloadTooLarge(MAX_BODY_BYTES);
+  return null;
+}
+
+/** Decode and parse body bytes read in full, or the error answer to send instead. */
+export function parseJsonBody(read: BodyBytes): BodyResult {
   if (!read.ok) {
     if (read.reason === 'too_large') return refuse(payloadTooLarge(MAX_BODY_BYTES));
     return refuse(invalidBody(UNREAD[read.reason]));
@@ -65,6 +68,23 @@ export async function readJsonBody(request: ApiRequest): Promise<BodyResult> {
     const why = error instanceof SyntaxError ? `: ${error.message.slice(0, 120)}` : '';
     return refuse(invalidBody(`the body is not valid JSON${why}`));
   }
+}
+
+/**
+ * Read and parse the request's JSON body, then answer with `use(value)`; or the error answer.
+ * The rest runs synchronously once the bytes are in: on the server's short path, each further
+ * promise per request cost more than the zod parse (async hooks are on for the page requests).
+ */
+export function withJsonBody(
+  request: ApiRequest,
+  use: (value: unknown) => ApiAnswer,
+): ApiAnswer | Promise<ApiAnswer> {
+  const refused = refusedByHeaders(request);
+  if (refused) return refused;
+  return request.readBody(MAX_BODY_BYTES, BODY_DEADLINE_MS).then((read) => {
+    const body = parseJsonBody(read);
+    return body.ok ? use(body.value) : body.answer;
+  });
 }
 
 /** Join body chunks into one array (no copy for a single chunk). */

@@ -27,21 +27,43 @@ function logUnexpected(request: ApiRequest, error: unknown): void {
   );
 }
 
-/** Wrap a handler: rate limit first, CORS always, and a JSON 422 instead of any thrown error. */
-export function guarded(handler: ApiOperation, options: { limited?: boolean } = {}): ApiOperation {
-  return async (request) => {
+function failure(request: ApiRequest, error: unknown): ApiAnswer {
+  logUnexpected(request, error);
+  return withCors(cannotCompute(request.requestId));
+}
+
+/** A handler's answer with the no-store default and CORS; any thrown error becomes a 422. */
+function settle(request: ApiRequest, handler: ApiOperation): ApiAnswer | Promise<ApiAnswer> {
+  const finish = (answer: ApiAnswer): ApiAnswer => {
+    answer.headers['Cache-Control'] ??= 'no-store';
+    return withCors(answer);
+  };
+  try {
+    const answer = handler(request);
+    if (!(answer instanceof Promise)) return finish(answer);
+    return answer.then(finish, (error: unknown) => failure(request, error));
+  } catch (error) {
+    return failure(request, error);
+  }
+}
+
+/**
+ * Wrap a handler: rate limit first, CORS always, and a JSON 422 instead of any thrown error.
+ * Synchronous whenever the handler and the limit are, so the short path adds no promise.
+ */
+export function guarded(handler: ApiOperation): ApiOperation {
+  return (request) => {
+    let limit: ReturnType<typeof checkRateLimit>;
     try {
-      if (options.limited !== false) {
-        const refused = await checkRateLimit(request.clientAddress);
-        if (refused) return withCors(refused);
-      }
-      const answer = await handler(request);
-      answer.headers['Cache-Control'] ??= 'no-store';
-      return withCors(answer);
+      limit = checkRateLimit(request.clientAddress);
     } catch (error) {
-      logUnexpected(request, error);
-      return withCors(cannotCompute(request.requestId));
+      return failure(request, error);
     }
+    if (limit === null) return settle(request, handler);
+    return limit.then(
+      (refused) => (refused ? withCors(refused) : settle(request, handler)),
+      (error: unknown) => failure(request, error),
+    );
   };
 }
 

@@ -25,15 +25,20 @@ function limiterFor(points: number): RateLimiterMemory {
   return current.limiter;
 }
 
-/** Count one request from this client; the 429 answer when it is over the limit, else null. */
-export async function checkRateLimit(clientKey: string): Promise<ApiAnswer | null> {
+/**
+ * Count one request from this client: the 429 answer when it is over the limit, else null.
+ * Plain null, not a promise, when the limit is off.
+ */
+export function checkRateLimit(clientKey: string): Promise<ApiAnswer | null> | null {
   const points = rateLimitPerMinute();
   if (points === 0) return null;
-  try {
-    await limiterFor(points).consume(clientKey);
-    return null;
-  } catch (rejection) {
-    if (!(rejection instanceof RateLimiterRes)) throw rejection;
-    return rateLimited(Math.max(1, Math.ceil(rejection.msBeforeNext / 1000)));
-  }
+  return limiterFor(points)
+    .consume(clientKey)
+    .then(
+      () => null,
+      (rejection: unknown) => {
+        if (!(rejection instanceof RateLimiterRes)) throw rejection;
+        return rateLimited(Math.max(1, Math.ceil(rejection.msBeforeNext / 1000)));
+      },
+    );
 }

@@ -7,7 +7,7 @@ import { getConfig } from '../config';
 import { solveDrain, solveLine, solveSiphon } from '../hydraulics';
 import type { ApiOperation } from './answer';
 import { jsonAnswer } from './answer';
-import { readJsonBody } from './body';
+import { withJsonBody } from './body';
 import { catalogAnswer } from './catalog-view';
 import { errorAnswer, invalidInputBody } from './errors';
 import { answer, guarded } from './guard';
@@ -22,13 +22,13 @@ function jsonPost<S extends z.ZodType>(
   schema: S,
   solve: (input: z.output<S>) => unknown,
 ): ApiOperation {
-  return guarded(async (request) => {
-    const body = await readJsonBody(request);
-    if (!body.ok) return body.answer;
-    const parsed = schema.safeParse(body.value);
-    if (!parsed.success) return jsonAnswer(400, invalidInputBody(parsed.error, body.value));
-    return answer(request, () => solve(parsed.data));
-  });
+  return guarded((request) =>
+    withJsonBody(request, (value) => {
+      const parsed = schema.safeParse(value);
+      if (!parsed.success) return jsonAnswer(400, invalidInputBody(parsed.error, value));
+      return answer(request, () => solve(parsed.data));
+    }),
+  );
 }
 
 /** POST /api/v1/siphon — siphon: flow, crest pressure and verdict. */

@@ -14,7 +14,7 @@ import { compress } from '../server/compression';
 import { routeConsoleToLogger } from '../server/console-bridge';
 import { logger } from '../server/logger';
 import { runWithRequestId } from '../server/request-context';
-import { securityHeaders } from '../server/security-headers';
+import { API_CSP, securityHeaders } from '../server/security-headers';
 
 type Handler = (req: http.IncomingMessage, res: http.ServerResponse) => void;
 
@@ -36,13 +36,13 @@ async function main(): Promise<void> {
   const entry = pathToFileURL(path.resolve('dist/server/entry.mjs')).href;
   const { handler } = (await import(entry)) as { handler: Handler };
   const headers = Object.entries(securityHeaders(config.production));
-  const flatHeaders = headers.flat();
+  const apiHeaders = Object.entries(securityHeaders(config.production, API_CSP)).flat();
 
   const server = http.createServer((req, res) => {
     // API v1 gives each request its id and log line, caps its own body at 64 KiB, drains an
     // unread body itself, and its small JSON answers skip compression: it goes first, past the
     // page machinery.
-    if (serveApiV1(req, res, flatHeaders)) return;
+    if (serveApiV1(req, res, apiHeaders)) return;
     const id = trackRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
     if (refuseOversizedBody(req, res)) return;

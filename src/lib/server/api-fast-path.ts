@@ -99,10 +99,17 @@ export function serveApiV1(
   if (!operation) return false;
   const id = requestIdOf(req);
   logWhenDone(req, res, id);
-  Promise.resolve(operation(fromNode(req, url, id))).then(
-    (answer) => send(req, res, answer, [...baseHeaders, 'X-Request-Id', id]),
-    // Operations are guarded and do not throw; this only covers a socket gone mid-answer.
-    () => res.destroy(),
-  );
+  const head = [...baseHeaders, 'X-Request-Id', id];
+  const reply = (answer: ApiAnswer): void => {
+    try {
+      send(req, res, answer, head);
+    } catch {
+      res.destroy(); // the socket went away mid-answer
+    }
+  };
+  // Operations are guarded and do not throw or reject. Most answer synchronously once the body is in.
+  const answer = operation(fromNode(req, url, id));
+  if (answer instanceof Promise) answer.then(reply, () => res.destroy());
+  else reply(answer);
   return true;
 }

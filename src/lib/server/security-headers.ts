@@ -8,8 +8,9 @@
  * runtime, bundled scripts it inlines, the island style — and sends the policy as a header: on
  * server pages from the render, on prerendered pages from dist/_experimentalHeaders.json (the
  * Node adapter's experimentalStaticHeaders). The hash list is the same for every page, so the
- * policy read back from that file is also the default here, for every other response (API, static
- * files, middleware answers, error pages) — one policy everywhere. Pages that build an inline style
+ * policy read back from that file is also the default here, for every other response (static
+ * files, middleware answers, error pages) — one page policy everywhere; API v1's JSON answers
+ * carry API_CSP instead. Pages that build an inline style
  * per request (the print report's brand colours) add its hash with Astro.csp.insertStyleHash.
  * Rules that keep it working: no `is:inline` scripts, no `style="…"` attributes in server-rendered
  * markup (React setting element.style at run time is not affected), no event-handler attributes.
@@ -34,6 +35,12 @@ export const CSP_DIRECTIVES: CspDirective[] = [
   "base-uri 'self'",
   "frame-ancestors 'none'",
 ];
+
+/**
+ * The policy on API v1's JSON answers: load nothing, never be framed. A JSON answer runs no
+ * script or style, so the pages' hash list (1 KB on every answer) would buy it nothing.
+ */
+export const API_CSP = "default-src 'none'; frame-ancestors 'none'";
 
 /** Strictest fallback when no build policy is found: no inline script or style at all. */
 const FALLBACK_CSP = [...CSP_DIRECTIVES, "script-src 'self'", "style-src 'self'"].join('; ');
