@@ -18,12 +18,17 @@ interface Props {
 /** A labelled native select (the phone's own picker), at least 48 px tall. */
 export default function SelectField(p: Props): ReactElement {
   const id = useId();
+  // When the labels change (a unit switch renames every hose size), a new select replaces the
+  // old one: the browser redoes a select's option list for each option renamed in place, a
+  // millisecond apiece on a phone.
+  const labels = p.choices.map((c) => c.label).join('\n');
   return (
     <div className="min-w-0">
       <label htmlFor={id} className="block font-semibold">
         {p.label}
       </label>
       <select
+        key={labels}
         id={id}
         name={p.name}
         value={p.value}
