@@ -8,7 +8,8 @@ import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { drainVerdict } from '../lib/calculators/verdict';
 import type { DrainResult } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
-import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
+import { useCalcState } from '../lib/stores/use-calc-state';
+import { useStagedUnits } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import ChartPanel from './ChartPanel';
 import DrainHints from './DrainHints';
@@ -62,33 +63,37 @@ function figures(r: DrainResult): Figure[] {
 
 /** The full drain-down tool: every vessel shape, every outlet, the drawdown curve, what would help. */
 export default function DrainTool(): ReactElement {
-  const system = useUnitSystem();
+  // Parts switched one at a time: vessel, outlet, water and time, figures, drawings.
+  const units = useStagedUnits(5);
   const {
     state: s,
     update,
     query,
-  } = useCalcState<DrainToolState>(DRAIN_TOOL_DEFAULTS, {
-    fittings: FITTING_ROW,
-    stage: STAGE_ROW,
-  });
+  } = useCalcState<DrainToolState>(
+    DRAIN_TOOL_DEFAULTS,
+    { fittings: FITTING_ROW, stage: STAGE_ROW },
+    units.settled,
+  );
+  const figuresIn = units.at(3);
+  const drawingsIn = units.at(4);
   const out = useMemo(() => compute(s), [s]);
   const inputs = (
     <>
       <InputGroup title="Vessel, basin or pond">
-        <VesselFields s={s} update={update} system={system} />
+        <VesselFields s={s} update={update} system={units.at(0)} />
       </InputGroup>
       <InputGroup title="Outlet">
-        <DrainOutletFields s={s} update={update} system={system} />
+        <DrainOutletFields s={s} update={update} system={units.at(1)} />
       </InputGroup>
       <InputGroup title="Water and site">
-        <WaterSiteFields s={s} update={update} system={system} />
+        <WaterSiteFields s={s} update={update} system={units.at(2)} />
       </InputGroup>
       <InputGroup title="Time you have (optional)">
         <NumberField
           name="target_time_s"
           label="The job may take"
           kind="time"
-          system={system}
+          system={units.at(2)}
           value={s.target_time_s}
           onChange={(v) => update({ target_time_s: v })}
           hint="0 for none"
@@ -109,7 +114,7 @@ export default function DrainTool(): ReactElement {
     ) : (
       <>
         <VerdictBanner verdict={drainVerdict(out.r)} />
-        <FigureList figures={figures(out.r)} system={system} />
+        <FigureList figures={figures(out.r)} system={figuresIn} />
         <p data-testid="limits">It stops when {STOP_WORDS[out.r.stop_reason]}.</p>
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={cautions} />
@@ -117,19 +122,19 @@ export default function DrainTool(): ReactElement {
           tool="drain"
           inputs={out.req}
           results={out.r}
-          unitSystem={system}
+          unitSystem={units.system}
           path="/drain"
           query={query}
         />
-        <TankSchematic s={s} system={system} />
+        <TankSchematic s={s} system={drawingsIn} />
         {out.r.status !== 'no_flow' && (
           <ChartPanel
             title="Drawdown"
-            table={<DrawdownTable curve={out.r.curve} system={system} />}
-            chart={() => <DrawdownChart curve={out.r.curve} system={system} />}
+            table={<DrawdownTable curve={out.r.curve} system={drawingsIn} />}
+            chart={() => <DrawdownChart curve={out.r.curve} system={drawingsIn} />}
           />
         )}
-        <DrainHints solved={out} system={system} />
+        <DrainHints solved={out} system={figuresIn} />
       </>
     );
   return <ToolLayout inputs={inputs} result={result} footer={<ShareLink query={query} />} />;

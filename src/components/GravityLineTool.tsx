@@ -7,8 +7,10 @@ import type { LineToolState } from '../lib/calculators/line-tool';
 import { LINE_TOOL_DEFAULTS, lineToolRequest } from '../lib/calculators/line-tool';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { lineVerdict } from '../lib/calculators/verdict';
+import type { UnitSystem } from '../lib/hydraulics';
 import { formatQuantity, solveLine } from '../lib/hydraulics';
-import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
+import { useCalcState } from '../lib/stores/use-calc-state';
+import { useStagedUnits } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
@@ -23,11 +25,16 @@ import ResultActions from './ResultActions';
 import WarningList from './WarningList';
 import WaterSiteFields from './WaterSiteFields';
 
-function compute(s: LineToolState, system: ReturnType<typeof useUnitSystem>) {
+function compute(s: LineToolState, system: UnitSystem) {
   try {
     const req = lineToolRequest(s);
     const r = solveLine(req);
-    return { req, r, big: biggestLoss(r.losses_m), hints: lineHints(req, s.size, s.target_flow_m3_s, system) };
+    return {
+      req,
+      r,
+      big: biggestLoss(r.losses_m),
+      hints: lineHints(req, s.size, s.target_flow_m3_s, system),
+    };
   } catch (e) {
     return { error: inputErrorText(e) };
   }
@@ -35,22 +42,37 @@ function compute(s: LineToolState, system: ReturnType<typeof useUnitSystem>) {
 
 /** The full gravity-line tool: every engine input, the loss breakdown and what would help. */
 export default function GravityLineTool(): ReactElement {
-  const system = useUnitSystem();
-  const { state: s, update, query } = useCalcState<LineToolState>(LINE_TOOL_DEFAULTS, { fittings: FITTING_ROW });
-  const out = useMemo(() => compute(s, system), [s, system]);
+  // Parts switched one at a time: levels, line, water and target, figures, drawings.
+  const units = useStagedUnits(5);
+  const {
+    state: s,
+    update,
+    query,
+  } = useCalcState<LineToolState>(LINE_TOOL_DEFAULTS, { fittings: FITTING_ROW }, units.settled);
+  const figuresIn = units.at(3);
+  const drawingsIn = units.at(4);
+  const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const inputs = (
     <>
       <InputGroup title="Levels">
-        <LevelFields s={s} update={update} system={system} />
+        <LevelFields s={s} update={update} system={units.at(0)} />
       </InputGroup>
       <InputGroup title="Hose or pipe">
-        <LineFields s={s} update={update} system={system} />
+        <LineFields s={s} update={update} system={units.at(1)} />
       </InputGroup>
       <InputGroup title="Water and site">
-        <WaterSiteFields s={s} update={update} system={system} />
+        <WaterSiteFields s={s} update={update} system={units.at(2)} />
       </InputGroup>
       <InputGroup title="Target (optional)">
-        <NumberField name="target_flow_m3_s" label="Flow you need" kind="flow" system={system} value={s.target_flow_m3_s} onChange={(v) => update({ target_flow_m3_s: v })} hint="0 for none; sizes the line for you" />
+        <NumberField
+          name="target_flow_m3_s"
+          label="Flow you need"
+          kind="flow"
+          system={units.at(2)}
+          value={s.target_flow_m3_s}
+          onChange={(v) => update({ target_flow_m3_s: v })}
+          hint="0 for none; sizes the line for you"
+        />
       </InputGroup>
     </>
   );
@@ -60,19 +82,31 @@ export default function GravityLineTool(): ReactElement {
     ) : (
       <>
         <VerdictBanner verdict={lineVerdict(out.r)} />
-        <FigureList figures={lineFigures(out.r)} system={system} />
+        <FigureList figures={lineFigures(out.r)} system={figuresIn} />
         <FlowFacts r={out.r} />
         {out.big && (
           <p data-testid="limits">
-            What limits it: {out.big.name.toLowerCase()}, {Math.round(out.big.share * 100)} % of the head (
-            {formatQuantity('length', out.big.head_m, system)}).
+            What limits it: {out.big.name.toLowerCase()}, {Math.round(out.big.share * 100)} % of the
+            head ({formatQuantity('length', out.big.head_m, figuresIn)}).
           </p>
         )}
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={['intake-entrapment', 'discharge', 'estimates']} />
-        <ResultActions tool="line" inputs={out.req} results={out.r} unitSystem={system} path="/gravity-line" query={query} />
-        <LineSchematic sourceLevelM={s.source_level_m} outletM={s.outlet_m} tailwaterM={s.has_tail ? s.tailwater_m : undefined} system={system} />
-        <LossPanel r={out.r} system={system} />
+        <ResultActions
+          tool="line"
+          inputs={out.req}
+          results={out.r}
+          unitSystem={units.system}
+          path="/gravity-line"
+          query={query}
+        />
+        <LineSchematic
+          sourceLevelM={s.source_level_m}
+          outletM={s.outlet_m}
+          tailwaterM={s.has_tail ? s.tailwater_m : undefined}
+          system={drawingsIn}
+        />
+        <LossPanel r={out.r} system={drawingsIn} />
         <HintList hints={out.hints} />
       </>
     );

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { ReactElement } from 'react';
 import type { LineFieldsState } from '../lib/calculators/tool-state';
 import type { UnitSystem } from '../lib/hydraulics';
@@ -15,7 +16,7 @@ interface Props {
 const ENTRANCES = fittings.filter((f) => f.kind === 'entrance');
 
 /** The hose or pipe: catalogue size or own bore, material, length, entrance, fittings, lines. */
-export default function LineFields({ s, update, system }: Props): ReactElement {
+function LineFields({ s, update, system }: Props): ReactElement {
   const sizeChoices = [
     ...sizes.map((z) => ({ value: z.id, label: system === 'us' ? z.name_us : z.name_metric })),
     { value: 'custom', label: 'Other: type the inside diameter' },
@@ -26,12 +27,38 @@ export default function LineFields({ s, update, system }: Props): ReactElement {
   ];
   return (
     <div className="grid gap-4 sm:grid-cols-2">
-      <SelectField name="size" label="Hose or pipe size" value={s.size} choices={sizeChoices} onChange={(v) => update({ size: v })} />
+      <SelectField
+        name="size"
+        label="Hose or pipe size"
+        value={s.size}
+        choices={sizeChoices}
+        onChange={(v) => update({ size: v })}
+      />
       {s.size === 'custom' && (
-        <NumberField name="diameter_m" label="Inside diameter" kind="diameter" system={system} value={s.diameter_m} onChange={(v) => update({ diameter_m: v })} />
+        <NumberField
+          name="diameter_m"
+          label="Inside diameter"
+          kind="diameter"
+          system={system}
+          value={s.diameter_m}
+          onChange={(v) => update({ diameter_m: v })}
+        />
       )}
-      <SelectField name="material" label="Material (roughness)" value={s.material} choices={matChoices} onChange={(v) => update({ material: v })} />
-      <NumberField name="length_m" label="Line length" kind="length" system={system} value={s.length_m} onChange={(v) => update({ length_m: v })} />
+      <SelectField
+        name="material"
+        label="Material (roughness)"
+        value={s.material}
+        choices={matChoices}
+        onChange={(v) => update({ material: v })}
+      />
+      <NumberField
+        name="length_m"
+        label="Line length"
+        kind="length"
+        system={system}
+        value={s.length_m}
+        onChange={(v) => update({ length_m: v })}
+      />
       <SelectField
         name="entrance"
         label="Intake"
@@ -54,3 +81,7 @@ export default function LineFields({ s, update, system }: Props): ReactElement {
     </div>
   );
 }
+
+// Memoised: while the units switch part by part (use-staged-units.ts), the other parts skip
+// rendering, and React rewrites no input's attributes there.
+export default memo(LineFields);

@@ -9,8 +9,14 @@ import { siphonProfile } from '../lib/calculators/siphon-profile';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { siphonVerdict } from '../lib/calculators/verdict';
 import type { UnitSystem } from '../lib/hydraulics';
-import { formatQuantity, resolveFluid, siphonBreakSourceLevel, solveSiphon } from '../lib/hydraulics';
-import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
+import {
+  formatQuantity,
+  resolveFluid,
+  siphonBreakSourceLevel,
+  solveSiphon,
+} from '../lib/hydraulics';
+import { useCalcState } from '../lib/stores/use-calc-state';
+import { useStagedUnits } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
@@ -38,7 +44,8 @@ function compute(s: SiphonToolState, system: UnitSystem) {
       req,
       r,
       big: biggestLoss(r.losses_m),
-      margin: r.status === 'no_flow' ? undefined : crestMarginM(r, resolveFluid(req.fluid).density_kg_m3),
+      margin:
+        r.status === 'no_flow' ? undefined : crestMarginM(r, resolveFluid(req.fluid).density_kg_m3),
       breakAt: r.status === 'no_flow' ? null : siphonBreakSourceLevel(req),
       profile: r.status === 'no_flow' ? [] : siphonProfile(req, r),
       hints: siphonHints(req, r, s.size, s.target_flow_m3_s, system),
@@ -50,66 +57,137 @@ function compute(s: SiphonToolState, system: UnitSystem) {
 
 /** The full siphon tool: flow, crest pressure against vapour pressure, priming, break level. */
 export default function SiphonTool(): ReactElement {
-  const system = useUnitSystem();
-  const { state: s, update, query } = useCalcState<SiphonToolState>(SIPHON_TOOL_DEFAULTS, { fittings: FITTING_ROW });
-  const out = useMemo(() => compute(s, system), [s, system]);
-  const len = (m: number): string => formatQuantity('length', m, system);
+  // Parts switched one at a time: levels and crest, line, water and target, figures, drawings.
+  const units = useStagedUnits(5);
+  const {
+    state: s,
+    update,
+    query,
+  } = useCalcState<SiphonToolState>(SIPHON_TOOL_DEFAULTS, { fittings: FITTING_ROW }, units.settled);
+  const figuresIn = units.at(3);
+  const drawingsIn = units.at(4);
+  const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
+  const len = (m: number): string => formatQuantity('length', m, figuresIn);
   const inputs = (
     <>
       <InputGroup title="Levels">
-        <LevelFields s={s} update={update} system={system} />
+        <LevelFields s={s} update={update} system={units.at(0)} />
       </InputGroup>
       <InputGroup title="Crest">
-        <SiphonCrestFields s={s} update={update} system={system} />
+        <SiphonCrestFields s={s} update={update} system={units.at(0)} />
       </InputGroup>
       <InputGroup title="Hose or pipe">
-        <LineFields s={s} update={update} system={system} />
+        <LineFields s={s} update={update} system={units.at(1)} />
       </InputGroup>
       <InputGroup title="Water and site">
-        <WaterSiteFields s={s} update={update} system={system} />
+        <WaterSiteFields s={s} update={update} system={units.at(2)} />
       </InputGroup>
       <InputGroup title="Target (optional)">
-        <NumberField name="target_flow_m3_s" label="Flow you need" kind="flow" system={system} value={s.target_flow_m3_s} onChange={(v) => update({ target_flow_m3_s: v })} hint="0 for none" />
+        <NumberField
+          name="target_flow_m3_s"
+          label="Flow you need"
+          kind="flow"
+          system={units.at(2)}
+          value={s.target_flow_m3_s}
+          onChange={(v) => update({ target_flow_m3_s: v })}
+          hint="0 for none"
+        />
       </InputGroup>
     </>
   );
-  if ('error' in out) return <ToolLayout inputs={inputs} result={<InputProblem text={out.error!} />} />;
+  if ('error' in out)
+    return <ToolLayout inputs={inputs} result={<InputProblem text={out.error!} />} />;
   const { r } = out;
   const figures = [
     ...lineFigures(r),
-    { id: 'crest-pressure', label: 'Pressure at the crest', kind: 'pressure' as const, si: r.crest_pressure_abs_pa },
-    { id: 'crest-limit', label: 'Working limit at the crest', kind: 'pressure' as const, si: r.crest_limit_pa },
+    {
+      id: 'crest-pressure',
+      label: 'Pressure at the crest',
+      kind: 'pressure' as const,
+      si: r.crest_pressure_abs_pa,
+    },
+    {
+      id: 'crest-limit',
+      label: 'Working limit at the crest',
+      kind: 'pressure' as const,
+      si: r.crest_limit_pa,
+    },
     { id: 'vapour', label: 'Vapour pressure', kind: 'pressure' as const, si: r.vapor_pressure_pa },
-    { id: 'max-crest', label: 'Highest crest above the water', kind: 'length' as const, si: r.max_crest_height_m, note: 'where crest pressure meets vapour pressure' },
+    {
+      id: 'max-crest',
+      label: 'Highest crest above the water',
+      kind: 'length' as const,
+      si: r.max_crest_height_m,
+      note: 'where crest pressure meets vapour pressure',
+    },
     { id: 'priming', label: 'Water to prime', kind: 'volume' as const, si: r.priming_volume_m3 },
   ];
   const result = (
     <>
       <VerdictBanner verdict={siphonVerdict(r)} />
-      <FigureList figures={figures} system={system} />
+      <FigureList figures={figures} system={figuresIn} />
       <FlowFacts r={r} />
       <ul className="list-disc space-y-1 pl-5" data-testid="limits">
-        {out.big && <li>Biggest loss: {out.big.name.toLowerCase()}, {Math.round(out.big.share * 100)} % of the head ({len(out.big.head_m)}).</li>}
+        {out.big && (
+          <li>
+            Biggest loss: {out.big.name.toLowerCase()}, {Math.round(out.big.share * 100)} % of the
+            head ({len(out.big.head_m)}).
+          </li>
+        )}
         {out.margin !== undefined &&
           (out.margin >= 0 ? (
-            <li>Crest margin: the crest could rise {len(out.margin)} more before the working limit.</li>
+            <li>
+              Crest margin: the crest could rise {len(out.margin)} more before the working limit.
+            </li>
           ) : (
             <li>Crest margin: the crest is {len(-out.margin)} past the working limit.</li>
           ))}
-        {out.breakAt !== null && out.breakAt !== undefined && <li>As the source falls, the siphon is expected to break when its surface reaches {len(out.breakAt)} (elevation).</li>}
+        {out.breakAt !== null && out.breakAt !== undefined && (
+          <li>
+            As the source falls, the siphon is expected to break when its surface reaches{' '}
+            {len(out.breakAt)} (elevation).
+          </li>
+        )}
       </ul>
       <WarningList warnings={r.warnings} />
       <CautionNotes ids={['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates']} />
-      <ResultActions tool="siphon" inputs={out.req} results={r} unitSystem={system} path="/siphon" query={query} />
-      <LineSchematic sourceLevelM={s.source_level_m} outletM={s.outlet_m} crestM={s.crest_m} tailwaterM={s.has_tail ? s.tailwater_m : undefined} system={system} />
+      <ResultActions
+        tool="siphon"
+        inputs={out.req}
+        results={r}
+        unitSystem={units.system}
+        path="/siphon"
+        query={query}
+      />
+      <LineSchematic
+        sourceLevelM={s.source_level_m}
+        outletM={s.outlet_m}
+        crestM={s.crest_m}
+        tailwaterM={s.has_tail ? s.tailwater_m : undefined}
+        system={drawingsIn}
+      />
       {out.profile.length > 0 && (
         <ChartPanel
           title="Pressure along the siphon"
-          table={<PressureTable points={out.profile} vaporPa={r.vapor_pressure_pa} limitPa={r.crest_limit_pa} system={system} />}
-          chart={() => <CrestPressureChart points={out.profile} vaporPa={r.vapor_pressure_pa} limitPa={r.crest_limit_pa} system={system} />}
+          table={
+            <PressureTable
+              points={out.profile}
+              vaporPa={r.vapor_pressure_pa}
+              limitPa={r.crest_limit_pa}
+              system={drawingsIn}
+            />
+          }
+          chart={() => (
+            <CrestPressureChart
+              points={out.profile}
+              vaporPa={r.vapor_pressure_pa}
+              limitPa={r.crest_limit_pa}
+              system={drawingsIn}
+            />
+          )}
         />
       )}
-      <LossPanel r={r} system={system} />
+      <LossPanel r={r} system={drawingsIn} />
       <HintList hints={out.hints} />
     </>
   );

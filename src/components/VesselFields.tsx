@@ -1,4 +1,4 @@
-import { Suspense, lazy } from 'react';
+import { memo, Suspense, lazy } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState, VesselShape } from '../lib/calculators/drain-tool';
 import type { UnitSystem } from '../lib/hydraulics';
@@ -27,7 +27,7 @@ export const SHAPES: { value: VesselShape; label: string }[] = [
 type Key = keyof DrainToolState & string;
 
 /** The vessel: its shape and the dimensions that shape needs. */
-export default function VesselFields({ s, update, system }: Props): ReactElement {
+function VesselFields({ s, update, system }: Props): ReactElement {
   const len = (label: string, key: Key, hint?: string): ReactElement => (
     <NumberField
       key={key}
@@ -122,3 +122,7 @@ export default function VesselFields({ s, update, system }: Props): ReactElement
     </div>
   );
 }
+
+// Memoised: while the units switch part by part (use-staged-units.ts), the other parts skip
+// rendering, and React rewrites no input's attributes there.
+export default memo(VesselFields);

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { ReactElement } from 'react';
 import type { LineFieldsState } from '../lib/calculators/tool-state';
 import type { UnitSystem } from '../lib/hydraulics';
@@ -11,10 +12,18 @@ interface Props {
 }
 
 /** Water temperature, and the site's air pressure from altitude or a barometer. */
-export default function WaterSiteFields({ s, update, system }: Props): ReactElement {
+function WaterSiteFields({ s, update, system }: Props): ReactElement {
   return (
     <div className="grid gap-4 sm:grid-cols-2">
-      <NumberField name="temp_c" label="Water temperature" kind="temperature" system={system} value={s.temp_c} onChange={(v) => update({ temp_c: v })} hint="0 to 99 °C (32 to 210 °F)" />
+      <NumberField
+        name="temp_c"
+        label="Water temperature"
+        kind="temperature"
+        system={system}
+        value={s.temp_c}
+        onChange={(v) => update({ temp_c: v })}
+        hint="0 to 99 °C (32 to 210 °F)"
+      />
       <ChoiceButtons
         legend="Air pressure from"
         name="site_mode"
@@ -26,10 +35,28 @@ export default function WaterSiteFields({ s, update, system }: Props): ReactElem
         onChange={(v) => update({ site_mode: v as LineFieldsState['site_mode'] })}
       />
       {s.site_mode === 'altitude' ? (
-        <NumberField name="altitude_m" label="Altitude above sea level" kind="elevation" system={system} value={s.altitude_m} onChange={(v) => update({ altitude_m: v })} />
+        <NumberField
+          name="altitude_m"
+          label="Altitude above sea level"
+          kind="elevation"
+          system={system}
+          value={s.altitude_m}
+          onChange={(v) => update({ altitude_m: v })}
+        />
       ) : (
-        <NumberField name="pressure_pa" label="Barometer (absolute, not sea-level corrected)" kind="pressure" system={system} value={s.pressure_pa} onChange={(v) => update({ pressure_pa: v })} />
+        <NumberField
+          name="pressure_pa"
+          label="Barometer (absolute, not sea-level corrected)"
+          kind="pressure"
+          system={system}
+          value={s.pressure_pa}
+          onChange={(v) => update({ pressure_pa: v })}
+        />
       )}
     </div>
   );
 }
+
+// Memoised: while the units switch part by part (use-staged-units.ts), the other parts skip
+// rendering, and React rewrites no input's attributes there.
+export default memo(WaterSiteFields);

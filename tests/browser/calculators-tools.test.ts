@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
@@ -34,6 +34,34 @@ describe('full calculator tools on a phone', () => {
       await page.locator('canvas').first().waitFor();
       expect(scripts.length).toBeGreaterThan(before);
       expect(errors).toEqual([]);
+    });
+  }
+
+  // A first visit from a US browser hydrates in metric (as prerendered), then switches part by
+  // part (src/lib/stores/use-staged-units.ts); the page is ready only when the last part has.
+  for (const [route, depth, table] of [
+    ['/siphon', 'source_level_m', 'loss-table'],
+    ['/drain', 'initial_depth_m', 'drawdown-table'],
+  ]) {
+    test(`does show every part of ${route} in US units on a first visit from a US browser`, async () => {
+      const metric = await (await phoneContext(browser, app.url)).newPage();
+      await openHydrated(metric, route);
+      const context = await browser.newContext({
+        baseURL: app.url,
+        viewport: { width: 360, height: 740 },
+        locale: 'en-US',
+      });
+      const us = await context.newPage();
+      await openHydrated(us, route);
+      const value = async (page: Page, name: string): Promise<number> =>
+        Number(await page.locator(`input[name="${name}"]`).inputValue());
+      // NIST SP 811 App. B: 1 ft = 0.3048 m exactly; °F = °C × 9/5 + 32 exactly.
+      expect((await value(us, depth)) * 0.3048).toBeCloseTo(await value(metric, depth), 2);
+      expect(await value(us, 'temp_c')).toBeCloseTo((await value(metric, 'temp_c')) * 1.8 + 32, 1);
+      expect(await figure(us, 'flow')).toMatch(/US gal\/min$/);
+      expect(await us.getByTestId(table).textContent()).toContain(' ft');
+      expect(await metric.getByTestId(table).textContent()).not.toContain(' ft');
+      await context.close();
     });
   }
 

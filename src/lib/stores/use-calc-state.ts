@@ -31,9 +31,14 @@ export interface CalcState<T extends ShareState> {
   query: string;
 }
 
+/**
+ * `settled` is false while the tool is still switching units part by part (use-staged-units.ts);
+ * the page is marked ready only once it is not.
+ */
 export function useCalcState<T extends ShareState>(
   defaults: T,
   rowTemplates: Record<string, ShareRow> = {},
+  settled = true,
 ): CalcState<T> {
   const [state, setState] = useState<T>(defaults);
   const [loaded, setLoaded] = useState(false);
@@ -55,9 +60,12 @@ export function useCalcState<T extends ShareState>(
     if (!loaded) return;
     const url = `${window.location.pathname}${query ? `?${query}` : ''}${window.location.hash}`;
     window.history.replaceState(window.history.state, '', url);
-    // runs after the commit that shows the link's inputs: tells tests and scripts they are applied
-    document.documentElement.dataset.calcReady = '1';
   }, [query, loaded]);
+  useEffect(() => {
+    // runs after the commit that shows the link's inputs in the crew's units: tells tests and
+    // scripts they are applied
+    if (loaded && settled) document.documentElement.dataset.calcReady = '1';
+  }, [loaded, settled]);
   const update = useCallback((patch: Partial<T>) => setState((s) => ({ ...s, ...patch })), []);
   return { state, update, query };
 }
