@@ -32,12 +32,14 @@ function failure(request: ApiRequest, error: unknown): ApiAnswer {
   return withCors(cannotCompute(request.requestId));
 }
 
-/** A handler's answer with the no-store default and CORS; any thrown error becomes a 422. */
+/** An answer with the no-store default and CORS. */
+function finish(answer: ApiAnswer): ApiAnswer {
+  answer.headers['Cache-Control'] ??= 'no-store';
+  return withCors(answer);
+}
+
+/** A handler's answer, finished; any thrown error becomes a 422. */
 function settle(request: ApiRequest, handler: ApiOperation): ApiAnswer | Promise<ApiAnswer> {
-  const finish = (answer: ApiAnswer): ApiAnswer => {
-    answer.headers['Cache-Control'] ??= 'no-store';
-    return withCors(answer);
-  };
   try {
     const answer = handler(request);
     if (!(answer instanceof Promise)) return finish(answer);
