@@ -46,11 +46,7 @@ describe('full calculator tools on a phone', () => {
     test(`does show every part of ${route} in US units on a first visit from a US browser`, async () => {
       const metric = await (await phoneContext(browser, app.url)).newPage();
       await openHydrated(metric, route);
-      const context = await browser.newContext({
-        baseURL: app.url,
-        viewport: { width: 360, height: 740 },
-        locale: 'en-US',
-      });
+      const context = await phoneContext(browser, app.url, 'en-US');
       const us = await context.newPage();
       await openHydrated(us, route);
       const value = async (page: Page, name: string): Promise<number> =>

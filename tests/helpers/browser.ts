@@ -24,15 +24,22 @@ export async function launchBrowser(): Promise<Browser> {
   });
 }
 
-/** A phone-sized context (360 × 740, touch) as a contractor on site would have. */
-export async function phoneContext(browser: Browser, baseURL: string): Promise<BrowserContext> {
+/**
+ * A phone-sized context (360 × 740, touch) as a contractor on site would have; British English
+ * (metric) unless another locale is given.
+ */
+export async function phoneContext(
+  browser: Browser,
+  baseURL: string,
+  locale = 'en-GB',
+): Promise<BrowserContext> {
   return browser.newContext({
     baseURL,
     viewport: { width: 360, height: 740 },
     deviceScaleFactor: 2,
     isMobile: true,
     hasTouch: true,
-    locale: 'en-GB',
+    locale,
   });
 }
 
