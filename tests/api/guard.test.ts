@@ -7,6 +7,8 @@ import { afterEach, describe, expect, test, vi } from 'vitest';
 import type { ApiAnswer, ApiRequest } from '../../src/lib/api/answer';
 import { jsonAnswer } from '../../src/lib/api/answer';
 import { guarded } from '../../src/lib/api/guard';
+import { siphonOperation } from '../../src/lib/api/v1-operations';
+import { siphonRequest } from './samples';
 
 const request: ApiRequest = {
   method: 'POST',
@@ -55,5 +57,18 @@ describe('guarded', () => {
     const refused = await op(other);
     expect(Number(refused.headers['Retry-After'])).toBeGreaterThanOrEqual(1);
     expect(refused.headers['Access-Control-Allow-Origin']).toBe('*');
+  });
+
+  test('does answer a body the server has read already synchronously, as it would the same body read later', async () => {
+    vi.stubEnv('CALC_RATE_LIMIT_PER_MINUTE', '0');
+    const bytes = new TextEncoder().encode(JSON.stringify(siphonRequest));
+    const header = (name: string): string | null =>
+      name === 'content-type' ? 'application/json' : null;
+    const read = { ...request, header, readBody: () => ({ ok: true as const, bytes }) };
+    const later = { ...read, readBody: () => Promise.resolve({ ok: true as const, bytes }) };
+    const now = siphonOperation(read);
+    expect(now).not.toBeInstanceOf(Promise);
+    expect((now as ApiAnswer).status).toBe(200);
+    expect(now).toEqual(await siphonOperation(later));
   });
 });

@@ -20,8 +20,12 @@ export interface ApiRequest {
   method: string;
   url: URL;
   header(name: string): string | null;
-  /** The body, refused once it passes limitBytes or is still arriving after deadlineMs. */
-  readBody(limitBytes: number, deadlineMs: number): Promise<BodyBytes>;
+  /**
+   * The body, refused once it passes limitBytes or is still arriving after deadlineMs. The
+   * server's short path may have read it already, with the same cap and deadline, and then
+   * returns it at once.
+   */
+  readBody(limitBytes: number, deadlineMs: number): BodyBytes | Promise<BodyBytes>;
   clientAddress: string;
   requestId: string;
 }

@@ -38,9 +38,9 @@ function refuse(answer: ApiAnswer): BodyResult {
 }
 
 /** The answer refusing the body from its headers alone (wrong type, declared too large), or null. */
-function refusedByHeaders(request: ApiRequest): ApiAnswer | null {
-  if (!isJsonContentType(request.header('content-type'))) return unsupportedMediaType();
-  const declared = Number(request.header('content-length'));
+export function refusedByHeaders(header: ApiRequest['header']): ApiAnswer | null {
+  if (!isJsonContentType(header('content-type'))) return unsupportedMediaType();
+  const declared = Number(header('content-length'));
   if (Number.isFinite(declared) && declared > MAX_BODY_BYTES)
     return payloadTooLarge(MAX_BODY_BYTES);
   return null;
@@ -72,19 +72,21 @@ export function parseJsonBody(read: BodyBytes): BodyResult {
 
 /**
  * Read and parse the request's JSON body, then answer with `use(value)`; or the error answer.
- * The rest runs synchronously once the bytes are in: on the server's short path, each further
- * promise per request cost more than the zod parse (async hooks are on for the page requests).
+ * Synchronous when the body is already in: on the server's short path, each promise per request
+ * cost more than the zod parse (async hooks are on for the page requests).
  */
 export function withJsonBody(
   request: ApiRequest,
   use: (value: unknown) => ApiAnswer,
 ): ApiAnswer | Promise<ApiAnswer> {
-  const refused = refusedByHeaders(request);
+  const refused = refusedByHeaders(request.header);
   if (refused) return refused;
-  return request.readBody(MAX_BODY_BYTES, BODY_DEADLINE_MS).then((read) => {
+  const answerBody = (read: BodyBytes): ApiAnswer => {
     const body = parseJsonBody(read);
     return body.ok ? use(body.value) : body.answer;
-  });
+  };
+  const read = request.readBody(MAX_BODY_BYTES, BODY_DEADLINE_MS);
+  return read instanceof Promise ? read.then(answerBody) : answerBody(read);
 }
 
 /** Join body chunks into one array (no copy for a single chunk). */
