@@ -23,7 +23,7 @@ function first(header: string | string[] | undefined): string | undefined {
  * destroying the socket, so the 413 still reaches the client (the server then closes the
  * connection).
  */
-export function readNodeBody(
+function readNodeBody(
   req: http.IncomingMessage,
   limit: number,
   deadlineMs: number,
@@ -61,6 +61,7 @@ function fromNode(
   req: http.IncomingMessage,
   target: string,
   requestId: string,
+  header: ApiRequest['header'],
   read?: BodyBytes,
 ): ApiRequest {
   let url: URL | undefined;
@@ -71,7 +72,7 @@ function fromNode(
     get url(): URL {
       return (url ??= new URL(target, 'http://localhost'));
     },
-    header: headerOf(req),
+    header,
     readBody: (limit, deadlineMs) =>
       read ?? new Promise((resolve) => readNodeBody(req, limit, deadlineMs, resolve)),
     clientAddress: first(req.headers['x-forwarded-for']) ?? req.socket.remoteAddress ?? 'unknown',
@@ -133,12 +134,13 @@ export function serveApiV1(
   // Operations are guarded and do not throw or reject; they answer synchronously once the body
   // is in. A JSON body an operation will read is read first, with a callback: a promise per
   // request cost a tenth of the call.
+  const header = headerOf(req);
   const run = (read?: BodyBytes): void => {
-    const answer = operation(fromNode(req, target, id, read));
+    const answer = operation(fromNode(req, target, id, header, read));
     if (answer instanceof Promise) answer.then(reply, () => res.destroy());
     else reply(answer);
   };
-  if (req.method === 'POST' && !refusedByHeaders(headerOf(req))) {
+  if (req.method === 'POST' && !refusedByHeaders(header)) {
     readNodeBody(req, MAX_BODY_BYTES, BODY_DEADLINE_MS, run);
   } else run();
   return true;
