@@ -8,8 +8,7 @@ import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { drainVerdict } from '../lib/calculators/verdict';
 import type { DrainResult } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
-import { useCalcState } from '../lib/stores/use-calc-state';
-import { useStagedUnits } from '../lib/stores/use-staged-units';
+import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import ChartPanel from './ChartPanel';
 import DrainHints from './DrainHints';
@@ -64,18 +63,17 @@ function figures(r: DrainResult): Figure[] {
 /** The full drain-down tool: every vessel shape, every outlet, the drawdown curve, what would help. */
 export default function DrainTool(): ReactElement {
   // Parts switched one at a time: vessel, outlet, water and time, figures, drawings.
-  const units = useStagedUnits(5);
   const {
     state: s,
     update,
     query,
-  } = useCalcState<DrainToolState>(
-    DRAIN_TOOL_DEFAULTS,
-    { fittings: FITTING_ROW, stage: STAGE_ROW },
-    units.settled,
-  );
-  const figuresIn = units.at(3);
-  const drawingsIn = units.at(4);
+    units,
+    figuresIn,
+    drawingsIn,
+  } = useStagedTool<DrainToolState>(DRAIN_TOOL_DEFAULTS, {
+    fittings: FITTING_ROW,
+    stage: STAGE_ROW,
+  });
   const out = useMemo(() => compute(s), [s]);
   const inputs = (
     <>

@@ -9,8 +9,7 @@ import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { lineVerdict } from '../lib/calculators/verdict';
 import type { UnitSystem } from '../lib/hydraulics';
 import { formatQuantity, solveLine } from '../lib/hydraulics';
-import { useCalcState } from '../lib/stores/use-calc-state';
-import { useStagedUnits } from '../lib/stores/use-staged-units';
+import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
@@ -43,14 +42,14 @@ function compute(s: LineToolState, system: UnitSystem) {
 /** The full gravity-line tool: every engine input, the loss breakdown and what would help. */
 export default function GravityLineTool(): ReactElement {
   // Parts switched one at a time: levels, line, water and target, figures, drawings.
-  const units = useStagedUnits(5);
   const {
     state: s,
     update,
     query,
-  } = useCalcState<LineToolState>(LINE_TOOL_DEFAULTS, { fittings: FITTING_ROW }, units.settled);
-  const figuresIn = units.at(3);
-  const drawingsIn = units.at(4);
+    units,
+    figuresIn,
+    drawingsIn,
+  } = useStagedTool<LineToolState>(LINE_TOOL_DEFAULTS, { fittings: FITTING_ROW });
   const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const inputs = (
     <>

@@ -15,8 +15,7 @@ import {
   siphonBreakSourceLevel,
   solveSiphon,
 } from '../lib/hydraulics';
-import { useCalcState } from '../lib/stores/use-calc-state';
-import { useStagedUnits } from '../lib/stores/use-staged-units';
+import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
@@ -58,14 +57,14 @@ function compute(s: SiphonToolState, system: UnitSystem) {
 /** The full siphon tool: flow, crest pressure against vapour pressure, priming, break level. */
 export default function SiphonTool(): ReactElement {
   // Parts switched one at a time: levels and crest, line, water and target, figures, drawings.
-  const units = useStagedUnits(5);
   const {
     state: s,
     update,
     query,
-  } = useCalcState<SiphonToolState>(SIPHON_TOOL_DEFAULTS, { fittings: FITTING_ROW }, units.settled);
-  const figuresIn = units.at(3);
-  const drawingsIn = units.at(4);
+    units,
+    figuresIn,
+    drawingsIn,
+  } = useStagedTool<SiphonToolState>(SIPHON_TOOL_DEFAULTS, { fittings: FITTING_ROW });
   const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const len = (m: number): string => formatQuantity('length', m, figuresIn);
   const inputs = (

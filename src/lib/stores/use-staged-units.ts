@@ -8,7 +8,9 @@
  */
 import { startTransition, useEffect, useState } from 'react';
 import type { UnitSystem } from '../hydraulics/units';
-import { useUnitSystem } from './use-calc-state';
+import type { ShareRow, ShareState } from '../share-url';
+import type { CalcState } from './use-calc-state';
+import { useCalcState, useUnitSystem } from './use-calc-state';
 
 interface Staging {
   from: UnitSystem;
@@ -53,4 +55,25 @@ export function useStagedUnits(stages: number): StagedUnits {
     at: (stage) => (stage < staging.reached ? staging.to : staging.from),
     settled: staging.to === system && staging.reached >= stages,
   };
+}
+
+/** A full tool's parts, switched in this order: its inputs in three, the figures, the drawings. */
+const TOOL_PARTS = 5;
+
+export interface StagedTool<T extends ShareState> extends CalcState<T> {
+  units: StagedUnits;
+  /** The system the result figures show now (part 3). */
+  figuresIn: UnitSystem;
+  /** The system the drawings, charts and tables show now (part 4). */
+  drawingsIn: UnitSystem;
+}
+
+/** A full tool's state (use-calc-state.ts), marked ready once its unit switch has settled. */
+export function useStagedTool<T extends ShareState>(
+  defaults: T,
+  rowTemplates: Record<string, ShareRow> = {},
+): StagedTool<T> {
+  const units = useStagedUnits(TOOL_PARTS);
+  const calc = useCalcState(defaults, rowTemplates, units.settled);
+  return { ...calc, units, figuresIn: units.at(3), drawingsIn: units.at(4) };
 }
