@@ -1,7 +1,7 @@
 import { lazy, useMemo } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState } from '../lib/calculators/drain-tool';
-import { DRAIN_TOOL_DEFAULTS, STAGE_ROW, drainToolRequest } from '../lib/calculators/drain-tool';
+import { DRAIN_TOOL_DEFAULTS, DRAIN_TOOL_US_START, STAGE_ROW, drainToolRequest } from '../lib/calculators/drain-tool';
 import { inputErrorText } from '../lib/calculators/field-names';
 import type { Figure } from '../lib/calculators/quick-result';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
@@ -70,10 +70,11 @@ export default function DrainTool(): ReactElement {
     units,
     figuresIn,
     drawingsIn,
-  } = useStagedTool<DrainToolState>(DRAIN_TOOL_DEFAULTS, {
-    fittings: FITTING_ROW,
-    stage: STAGE_ROW,
-  });
+  } = useStagedTool<DrainToolState>(
+    DRAIN_TOOL_DEFAULTS,
+    { fittings: FITTING_ROW, stage: STAGE_ROW },
+    DRAIN_TOOL_US_START,
+  );
   const out = useMemo(() => compute(s), [s]);
   const inputs = (
     <>

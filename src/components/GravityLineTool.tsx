@@ -4,7 +4,7 @@ import { inputErrorText } from '../lib/calculators/field-names';
 import { lineHints } from '../lib/calculators/hints';
 import { biggestLoss } from '../lib/calculators/limits';
 import type { LineToolState } from '../lib/calculators/line-tool';
-import { LINE_TOOL_DEFAULTS, lineToolRequest } from '../lib/calculators/line-tool';
+import { LINE_TOOL_DEFAULTS, LINE_TOOL_US_START, lineToolRequest } from '../lib/calculators/line-tool';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { lineVerdict } from '../lib/calculators/verdict';
 import type { UnitSystem } from '../lib/hydraulics';
@@ -49,7 +49,11 @@ export default function GravityLineTool(): ReactElement {
     units,
     figuresIn,
     drawingsIn,
-  } = useStagedTool<LineToolState>(LINE_TOOL_DEFAULTS, { fittings: FITTING_ROW });
+  } = useStagedTool<LineToolState>(
+    LINE_TOOL_DEFAULTS,
+    { fittings: FITTING_ROW },
+    LINE_TOOL_US_START,
+  );
   const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const inputs = (
     <>

@@ -1,7 +1,7 @@
 import { useMemo, useRef } from 'react';
 import type { ReactElement } from 'react';
 import type { QuickMode, QuickState } from '../lib/calculators/quick-check';
-import { QUICK_DEFAULTS } from '../lib/calculators/quick-check';
+import { QUICK_DEFAULTS, QUICK_US_START } from '../lib/calculators/quick-check';
 import type { QuickAnswer } from '../lib/calculators/quick-result';
 import { quickAnswer } from '../lib/calculators/quick-result';
 import { quickFlag } from '../lib/flags/quick-flag';
@@ -59,7 +59,7 @@ function Limits({ a, system }: { a: QuickAnswer; system: UnitSystem }): ReactEle
 /** The quick check: pick a set-up, type a few numbers, read the verdict and the cautions. */
 export default function QuickCheck(): ReactElement {
   const system = useUnitSystem();
-  const { state, update, query } = useCalcState<QuickState>(QUICK_DEFAULTS);
+  const { state, update, query } = useCalcState<QuickState>(QUICK_DEFAULTS, {}, true, QUICK_US_START);
   const answer = useMemo(() => quickAnswer(state), [state]);
   const resultRef = useRef<HTMLElement>(null);
   return (

@@ -4,7 +4,7 @@ import { inputErrorText } from '../lib/calculators/field-names';
 import { siphonHints } from '../lib/calculators/hints';
 import { biggestLoss, crestMarginM } from '../lib/calculators/limits';
 import type { SiphonToolState } from '../lib/calculators/line-tool';
-import { SIPHON_TOOL_DEFAULTS, siphonToolRequest } from '../lib/calculators/line-tool';
+import { SIPHON_TOOL_DEFAULTS, SIPHON_TOOL_US_START, siphonToolRequest } from '../lib/calculators/line-tool';
 import { siphonProfile } from '../lib/calculators/siphon-profile';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { siphonVerdict } from '../lib/calculators/verdict';
@@ -64,7 +64,11 @@ export default function SiphonTool(): ReactElement {
     units,
     figuresIn,
     drawingsIn,
-  } = useStagedTool<SiphonToolState>(SIPHON_TOOL_DEFAULTS, { fittings: FITTING_ROW });
+  } = useStagedTool<SiphonToolState>(
+    SIPHON_TOOL_DEFAULTS,
+    { fittings: FITTING_ROW },
+    SIPHON_TOOL_US_START,
+  );
   const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const len = (m: number): string => formatQuantity('length', m, figuresIn);
   const inputs = (

@@ -2,7 +2,13 @@
  * Calculator inputs ↔ a query string, so a link reproduces a result. Values travel in SI (the
  * engine's units), so a link made in US customary opens correctly in metric and vice versa.
  * Numbers are written with String(), which round-trips every double exactly.
+ *
+ * A tool starts a US crew on values that are round in feet and gallons, everyone else on the
+ * metric ones. A link lists what differs from the starting values it was made on and names
+ * them (`start=us`); a link without `start` builds on the metric ones (every link made before
+ * the US start did), and only a bare address starts the visitor on their own.
  */
+import type { UnitSystem } from './hydraulics/units';
 
 /** A calculator's inputs: flat, numbers in SI, choices as strings, lists as arrays of records. */
 export type ShareValue = number | string | boolean | ShareRow[];
@@ -83,4 +89,30 @@ export function decodeShare<T extends ShareState>(
     }
   }
   return out as T;
+}
+
+/** Query key naming the starting values a link builds on. */
+export const START_KEY = 'start';
+
+/** The starting values a query builds on; `own` (the visitor's units) for a bare address. */
+export function startOf(query: string, own: UnitSystem): UnitSystem {
+  const q = new URLSearchParams(query);
+  const named = q.get(START_KEY);
+  if (named === 'us' || named === 'metric') return named;
+  return q.keys().next().done ? own : 'metric';
+}
+
+/**
+ * The link query for `state` made on the `start` values `base`. It is never empty, so that a
+ * link to an unchanged metric start does not open on a US visitor's own start.
+ */
+export function shareQuery(
+  state: ShareState,
+  start: UnitSystem,
+  base: ShareState,
+  rowKeys: Record<string, string[]> = {},
+): string {
+  const changes = encodeShare(state, base, rowKeys);
+  if (start === 'metric' && changes) return changes;
+  return changes ? `${START_KEY}=${start}&${changes}` : `${START_KEY}=${start}`;
 }

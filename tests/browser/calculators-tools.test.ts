@@ -37,30 +37,6 @@ describe('full calculator tools on a phone', () => {
     });
   }
 
-  // A first visit from a US browser hydrates in metric (as prerendered), then switches part by
-  // part (src/lib/stores/use-staged-units.ts); the page is ready only when the last part has.
-  for (const [route, depth, table] of [
-    ['/siphon', 'source_level_m', 'loss-table'],
-    ['/drain', 'initial_depth_m', 'drawdown-table'],
-  ]) {
-    test(`does show every part of ${route} in US units on a first visit from a US browser`, async () => {
-      const metric = await (await phoneContext(browser, app.url)).newPage();
-      await openHydrated(metric, route);
-      const context = await phoneContext(browser, app.url, 'en-US');
-      const us = await context.newPage();
-      await openHydrated(us, route);
-      const value = async (page: Page, name: string): Promise<number> =>
-        Number(await page.locator(`input[name="${name}"]`).inputValue());
-      // NIST SP 811 App. B: 1 ft = 0.3048 m exactly; °F = °C × 9/5 + 32 exactly.
-      expect((await value(us, depth)) * 0.3048).toBeCloseTo(await value(metric, depth), 2);
-      expect(await value(us, 'temp_c')).toBeCloseTo((await value(metric, 'temp_c')) * 1.8 + 32, 1);
-      expect(await figure(us, 'flow')).toMatch(/US gal\/min$/);
-      expect(await us.getByTestId(table).textContent()).toContain(' ft');
-      expect(await metric.getByTestId(table).textContent()).not.toContain(' ft');
-      await context.close();
-    });
-  }
-
   test('does reproduce a siphon result from its share link', async () => {
     const page = await (await phoneContext(browser, app.url)).newPage();
     await openHydrated(page, '/siphon');

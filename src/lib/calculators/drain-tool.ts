@@ -6,7 +6,8 @@
 import type { DrainRequest, OutletInput, VesselInput } from '../hydraulics';
 import { entranceK } from './line-tool';
 import type { LineFieldsState } from './tool-state';
-import { LINE_FIELD_DEFAULTS, fluidInput, lineInput, siteInput } from './tool-state';
+import { LINE_FIELD_DEFAULTS, LINE_FIELD_US_START, fluidInput, lineInput, siteInput } from './tool-state';
+import { ft, ft2, inch } from './us-start';
 
 export type VesselShape = VesselInput['shape'];
 
@@ -81,6 +82,30 @@ export const DRAIN_TOOL_DEFAULTS: DrainToolState = {
   length_to_crest_m: 3,
   k_to_crest: 0,
   target_time_s: 0,
+};
+
+/** A US crew's starting values (us-start.ts): the same pond and tank, in round feet. */
+export const DRAIN_TOOL_US_START: Partial<DrainToolState> = {
+  ...LINE_FIELD_US_START,
+  length_m: ft(50),
+  v_length_m: ft(12),
+  v_width_m: ft(10),
+  v_depth_m: ft(5),
+  v_diameter_m: ft(6),
+  v_cone_height_m: ft(1.5),
+  v_bottom_length_m: ft(20),
+  v_bottom_width_m: ft(12),
+  stage: [
+    { depth_m: 0, area_m2: ft2(200) },
+    { depth_m: ft(1.5), area_m2: ft2(300) },
+    { depth_m: ft(3), area_m2: ft2(450) },
+  ],
+  initial_depth_m: ft(5),
+  hole_diameter_m: inch(2),
+  outlet_m: ft(-3),
+  tailwater_m: ft(-3),
+  crest_m: ft(6),
+  length_to_crest_m: ft(10),
 };
 
 export function vesselOf(s: DrainToolState): VesselInput {

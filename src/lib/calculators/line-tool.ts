@@ -5,7 +5,8 @@
 import type { LineRequest, SiphonRequest } from '../hydraulics';
 import { findFitting } from '../hydraulics';
 import type { LineFieldsState } from './tool-state';
-import { LINE_FIELD_DEFAULTS, fluidInput, lineInput, siteInput } from './tool-state';
+import { LINE_FIELD_DEFAULTS, LINE_FIELD_US_START, fluidInput, lineInput, siteInput } from './tool-state';
+import { ft, psia } from './us-start';
 
 export interface LineToolState extends LineFieldsState {
   source_level_m: number;
@@ -44,6 +45,21 @@ export const SIPHON_TOOL_DEFAULTS: SiphonToolState = {
   k_to_crest: 0,
   limit_mode: 'default',
   min_crest_pa: 25_000,
+};
+
+/** A US crew's starting values (us-start.ts). */
+export const LINE_TOOL_US_START: Partial<LineToolState> = {
+  ...LINE_FIELD_US_START,
+  source_level_m: ft(10),
+};
+
+export const SIPHON_TOOL_US_START: Partial<SiphonToolState> = {
+  ...LINE_FIELD_US_START,
+  length_m: ft(65),
+  outlet_m: ft(-8),
+  crest_m: ft(6),
+  length_to_crest_m: ft(20),
+  min_crest_pa: psia(3.5),
 };
 
 /** Entrance K of a catalogue entrance id (sharp edge when unknown). */

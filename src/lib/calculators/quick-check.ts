@@ -4,6 +4,7 @@
  * bottom (empty a tank), so the crew types only heights they can see.
  */
 import type { DrainRequest, LineRequest, OutletInput, SiphonRequest, VesselInput } from '../hydraulics';
+import { ft, inch, usGal } from './us-start';
 
 export type QuickMode = 'siphon' | 'line' | 'tank';
 
@@ -45,6 +46,20 @@ export const QUICK_DEFAULTS: QuickState = {
   tank_outlet: 'hose',
   drop_m: 0.5,
   hole_diameter_m: 0.025,
+};
+
+/** A US crew's starting values (us-start.ts): the same kind of job, in round feet and gallons. */
+export const QUICK_US_START: Partial<QuickState> = {
+  length_m: ft(50),
+  crest_m: ft(5),
+  fall_m: ft(6),
+  volume_m3: usGal(1500),
+  tank_length_m: ft(6),
+  tank_width_m: ft(5),
+  tank_diameter_m: ft(5),
+  water_depth_m: ft(4),
+  drop_m: ft(1.5),
+  hole_diameter_m: inch(1),
 };
 
 /** Hoses offered in the quick check (the full tools offer every catalogue size). */

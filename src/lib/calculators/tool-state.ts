@@ -5,6 +5,7 @@
  */
 import type { FluidInput, LineInput, SiteInput } from '../hydraulics';
 import { findSize } from '../hydraulics';
+import { degF, ft, inch, psia } from './us-start';
 
 export interface FittingRow {
   [key: string]: string | number;
@@ -42,6 +43,14 @@ export const LINE_FIELD_DEFAULTS: LineFieldsState = {
   site_mode: 'altitude',
   altitude_m: 0,
   pressure_pa: 101_325,
+};
+
+/** A US crew's starting values for the shared fields (us-start.ts). */
+export const LINE_FIELD_US_START: Partial<LineFieldsState> = {
+  diameter_m: inch(2),
+  length_m: ft(100),
+  temp_c: degF(60),
+  pressure_pa: psia(14.7),
 };
 
 /** Template for decoding fitting rows from a link. */

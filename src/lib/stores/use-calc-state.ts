@@ -7,7 +7,7 @@ import { useStore } from '@nanostores/react';
 import { startTransition, useCallback, useEffect, useState } from 'react';
 import type { UnitSystem } from '../hydraulics/units';
 import type { ShareRow, ShareState } from '../share-url';
-import { decodeShare, encodeShare } from '../share-url';
+import { decodeShare, shareQuery, startOf } from '../share-url';
 import { $unitSystem } from './unit-system';
 
 /** True after the first client render (a low-priority update, so hydration is not held up). */
@@ -33,32 +33,40 @@ export interface CalcState<T extends ShareState> {
 
 /**
  * `settled` is false while the tool is still switching units part by part (use-staged-units.ts);
- * the page is marked ready only once it is not.
+ * the page is marked ready only once it is not. `usStart` changes `defaults` into a US crew's
+ * starting values; which start a page opens on follows share-url.ts.
  */
 export function useCalcState<T extends ShareState>(
   defaults: T,
   rowTemplates: Record<string, ShareRow> = {},
   settled = true,
+  usStart: Partial<T> = {},
 ): CalcState<T> {
+  const [start, setStart] = useState<UnitSystem>('metric');
   const [state, setState] = useState<T>(defaults);
   const [loaded, setLoaded] = useState(false);
+  const base = start === 'us' ? { ...defaults, ...usStart } : defaults;
   useEffect(() => {
     const search = window.location.search;
+    const from = startOf(search, $unitSystem.get());
     // a transition: applying a shared link's inputs should not block the main thread at load
     startTransition(() => {
-      if (search) setState(decodeShare(search, defaults, rowTemplates));
+      setStart(from);
+      if (search || from === 'us') {
+        setState(decodeShare(search, from === 'us' ? { ...defaults, ...usStart } : defaults, rowTemplates));
+      }
       setLoaded(true);
     });
-    // defaults are module constants; read the URL once
+    // defaults and starts are module constants; read the URL once
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
   const rowKeys = Object.fromEntries(
     Object.entries(rowTemplates).map(([k, t]) => [k, Object.keys(t)]),
   );
-  const query = encodeShare(state, defaults, rowKeys);
+  const query = shareQuery(state, start, base, rowKeys);
   useEffect(() => {
     if (!loaded) return;
-    const url = `${window.location.pathname}${query ? `?${query}` : ''}${window.location.hash}`;
+    const url = `${window.location.pathname}?${query}${window.location.hash}`;
     window.history.replaceState(window.history.state, '', url);
   }, [query, loaded]);
   useEffect(() => {

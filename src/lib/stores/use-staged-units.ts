@@ -72,8 +72,9 @@ export interface StagedTool<T extends ShareState> extends CalcState<T> {
 export function useStagedTool<T extends ShareState>(
   defaults: T,
   rowTemplates: Record<string, ShareRow> = {},
+  usStart: Partial<T> = {},
 ): StagedTool<T> {
   const units = useStagedUnits(TOOL_PARTS);
-  const calc = useCalcState(defaults, rowTemplates, units.settled);
+  const calc = useCalcState(defaults, rowTemplates, units.settled, usStart);
   return { ...calc, units, figuresIn: units.at(3), drawingsIn: units.at(4) };
 }
