@@ -19,6 +19,11 @@ declare namespace App {
       email: string;
       name: string | null;
       staffRole: 'support' | 'admin' | null;
+      /**
+       * The unit system they last picked on any device (src/lib/data/users.ts), or null when they
+       * never have; pages put it on <html data-account-units> so every device starts on it.
+       */
+      unitSystem: 'metric' | 'us' | null;
     } | null;
     /**
      * The organisation the user is working in: the one in the dw_org cookie if they belong to it,

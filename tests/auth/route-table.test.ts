@@ -8,7 +8,7 @@ import type { Access } from '../../src/lib/auth/routes';
 
 /** The six kinds of visitor the issue names. */
 const org = (id: string, personal = false) => ({ id, name: id, plan: 'pro' as const, personal });
-const user = (id: string, staffRole: 'support' | 'admin' | null = null) => ({ id, email: `${id}@x.test`, name: id, staffRole });
+const user = (id: string, staffRole: 'support' | 'admin' | null = null) => ({ id, email: `${id}@x.test`, name: id, staffRole, unitSystem: null });
 export const VIEWERS: Record<string, Viewer> = {
   signedOut: { user: null, organisation: null, role: null },
   freeUser: { user: user('free'), organisation: org('org_free', true), role: 'owner' },

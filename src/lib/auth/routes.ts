@@ -73,6 +73,8 @@ export const ROUTES: readonly RouteRule[] = [
   // Signed-in app.
   { pattern: '/app', access: 'signed_in' },
   { pattern: '/app/account', access: 'signed_in' },
+  // The unit system is remembered on the account when someone is signed in (see the endpoint).
+  { pattern: '/api/account/units', access: 'anyone', session: 'optional' },
   { pattern: '/app/team', access: 'owner' },
   { pattern: '/app/billing', access: 'owner' },
   { pattern: '/app/brand', access: 'owner' },

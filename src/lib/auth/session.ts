@@ -49,13 +49,19 @@ export function sessionToken(cookies: AstroCookies): string | null {
 export function resolveViewer(token: string | null, preferredOrg: string | null): Viewer {
   if (!token) return SIGNED_OUT;
   const row = getDb()
-    .select({ id: users.id, email: users.email, name: users.name, staffRole: users.staffRole })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      staffRole: users.staffRole,
+      unitSystem: users.unitSystem,
+    })
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.userId))
     .where(and(eq(sessions.sessionToken, token), gt(sessions.expires, new Date())))
     .get();
   if (!row) return SIGNED_OUT;
-  const user = { ...row, staffRole: row.staffRole ?? null };
+  const user = { ...row, staffRole: row.staffRole ?? null, unitSystem: row.unitSystem ?? null };
   const all = membershipsForUser(user.id);
   const chosen =
     all.find((m) => m.organisation.id === preferredOrg) ??

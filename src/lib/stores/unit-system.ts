@@ -1,6 +1,9 @@
 /**
- * The crew's unit system, shared by every island on a page and remembered in localStorage.
- * The first visit takes it from the browser's language: en-US (and the US territories' English)
+ * The crew's unit system, shared by every island on a page and remembered in localStorage and,
+ * for a signed-in person, on their account (PUT /api/account/units). A page rendered for a
+ * signed-in person names the account's choice on <html data-account-units>, which wins and is
+ * copied to this browser, so a new device starts on it from the first signed-in page. Otherwise
+ * the first visit takes it from the browser's language: en-US (and the US territories' English)
  * reads US customary, everything else metric.
  */
 import { atom } from 'nanostores';
@@ -13,11 +16,23 @@ export function unitSystemForLanguage(language: string | undefined): UnitSystem 
   return /^en-US\b/i.test(language ?? '') ? 'us' : 'metric';
 }
 
+const isSystem = (v: unknown): v is UnitSystem => v === 'metric' || v === 'us';
+
+/** The account's unit system named on this page, copied to this browser; null when none is. */
+export function adoptAccountUnits(): UnitSystem | null {
+  const account = document.documentElement.dataset.accountUnits;
+  if (!isSystem(account)) return null;
+  remember(account);
+  return account;
+}
+
 function initial(): UnitSystem {
   if (typeof window === 'undefined') return 'metric';
+  const account = adoptAccountUnits();
+  if (account) return account;
   try {
     const saved = window.localStorage.getItem(UNIT_STORAGE_KEY);
-    if (saved === 'metric' || saved === 'us') return saved;
+    if (isSystem(saved)) return saved;
   } catch {
     // storage blocked (private mode): fall back to the language
   }
@@ -26,12 +41,27 @@ function initial(): UnitSystem {
 
 export const $unitSystem = atom<UnitSystem>(initial());
 
-/** Switch the unit system and remember the choice. */
-export function setUnitSystem(system: UnitSystem): void {
-  $unitSystem.set(system);
+function remember(system: UnitSystem): void {
   try {
     window.localStorage.setItem(UNIT_STORAGE_KEY, system);
   } catch {
     // not remembered, still switched
   }
+}
+
+/** Tell the account (the server ignores it when nobody is signed in); offline, it stays local. */
+function rememberOnAccount(system: UnitSystem): void {
+  fetch('/api/account/units', {
+    method: 'PUT',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ unit_system: system }),
+    keepalive: true,
+  }).catch(() => undefined);
+}
+
+/** Switch the unit system and remember the choice. */
+export function setUnitSystem(system: UnitSystem): void {
+  $unitSystem.set(system);
+  remember(system);
+  rememberOnAccount(system);
 }
