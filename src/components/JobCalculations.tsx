@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { ReactElement } from 'react';
 import { api, reopenHref } from '../lib/jobs/client-api';
+import { headlineOf } from '../lib/jobs/headline';
 
 export interface Calc {
   id: string;
@@ -8,7 +9,7 @@ export interface Calc {
   tool: 'line' | 'siphon' | 'drain';
   label: string;
   inputs: Record<string, unknown>;
-  results: { status?: string };
+  results: Record<string, unknown>;
   unitSystem: 'metric' | 'us';
   engineVersion: string;
   revisionOf: string | null;
@@ -19,6 +20,26 @@ interface Change { path: string; before: unknown; after: unknown }
 interface Rerun { engineVersion?: string; changes?: Change[]; error?: { message?: string } }
 
 const btn = 'min-h-11 rounded-md border border-rule bg-white px-3';
+const TOOL_NAMES = { line: 'Gravity line', siphon: 'Siphon', drain: 'Drain-down' } as const;
+const TONE_BORDER = { runs: 'border-verdict-runs', edge: 'border-verdict-edge', fails: 'border-verdict-fails' } as const;
+
+/** The saved result in a line: verdict word, then the key figures in the units it was saved in. */
+function CalcHeadline({ c }: { c: Calc }): ReactElement {
+  const h = headlineOf(c.tool, c.results, c.unitSystem);
+  return (
+    <div className={`border-l-4 pl-2 ${h.verdict ? TONE_BORDER[h.verdict.tone] : 'border-rule'}`}>
+      {h.verdict && <p className="font-extrabold" data-testid="calc-verdict" data-verdict={h.verdict.tone}>{h.verdict.word}</p>}
+      <dl className="flex flex-wrap gap-x-4 gap-y-1 text-step--1">
+        {h.figures.map((f) => (
+          <div key={f.label} className="flex gap-1">
+            <dt className="text-ink-soft">{f.label}</dt>
+            <dd className="font-semibold tabular-nums" data-calc-figure={f.label}>{f.value}</dd>
+          </div>
+        ))}
+      </dl>
+    </div>
+  );
+}
 
 function CalcItem({ c, canWrite, onChanged }: { c: Calc; canWrite: boolean; onChanged: () => void }): ReactElement {
   const [rerun, setRerun] = useState<Rerun | null>(null);
@@ -32,7 +53,8 @@ function CalcItem({ c, canWrite, onChanged }: { c: Calc; canWrite: boolean; onCh
   };
   return (
     <li className="grid gap-2 rounded-lg border border-rule bg-white p-3" data-testid="calculation">
-      <div className="font-semibold">{c.label || c.tool} <span className="text-ink-faint">· {c.tool} · {c.results.status}</span></div>
+      <div className="font-semibold">{c.label || TOOL_NAMES[c.tool]} <span className="text-ink-faint">· {TOOL_NAMES[c.tool]}</span></div>
+      <CalcHeadline c={c} />
       <div className="text-step--1 text-ink-faint">{c.id} · engine {c.engineVersion} · {new Date(c.createdAt).toLocaleString()}{c.revisionOf ? ` · revises ${c.revisionOf}` : ''}</div>
       <div className="flex flex-wrap gap-2">
         <a className={`${btn} inline-flex items-center`} href={reopenHref(c)}>Open in its tool</a>

@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, phoneContext } from '../helpers/browser';
-import { openHydrated } from '../browser/calculators-helpers';
+import { figure, openHydrated } from '../browser/calculators-helpers';
 import { startJobsApp } from './app-fixture';
 import type { JobsApp } from './app-fixture';
 
@@ -29,12 +29,17 @@ describe('save a quick check to a job on a phone', () => {
     ]);
     const page = await context.newPage();
     await openHydrated(page, '/check');
+    const [verdict, flow] = [await page.locator('[data-verdict]').first().innerText(), await figure(page, 'flow')];
     await page.getByRole('button', { name: 'Save to a job' }).click();
     await page.getByLabel('New job title').fill('Phone test pond');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Saved to the job.').waitFor();
     await page.getByRole('link', { name: 'Open the job' }).click();
     await page.getByTestId('calculation').first().waitFor();
+    // The job lists what the server's engine run gave, which is what the phone showed.
+    const saved = page.getByTestId('calculation').filter({ hasText: 'Siphon' }).first();
+    expect(verdict).toContain(await saved.getByTestId('calc-verdict').innerText());
+    expect(await saved.locator('[data-calc-figure="Flow"]').innerText()).toBe(flow);
     const width = await page.evaluate(() => document.documentElement.scrollWidth);
     expect(width).toBeLessThanOrEqual(360);
     const [download] = await Promise.all([
