@@ -57,6 +57,11 @@ export const PLANS: readonly PlanDisplay[] = [
   },
 ];
 
+/** The plan's own name ('Field', 'Crew') for an organisation's plan id. */
+export function planName(id: PlanId): string {
+  return PLANS.find((p) => p.id === id)?.name ?? id;
+}
+
 /** A whole-unit price as text, e.g. "$19"; free shows "$0". */
 export function formatPrice(amount: number, currency: string = CURRENCY): string {
   return new Intl.NumberFormat('en-US', {

@@ -55,7 +55,7 @@ describe('sign-in by e-mail link', () => {
     const callback = await fetch(await latestLink(email), { redirect: 'manual' });
     const cookie = callback.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
     const home = await (await fetch(`${app.url}/app`, { headers: { Cookie: cookie } })).text();
-    expect(home).toMatch(/data-testid="current-org"[^>]*>\s*Working in <strong[^>]*>new\.crew@riverside\.test<\/strong> as owner\s*· Free plan/);
+    expect(home).toMatch(/data-testid="current-org"[^>]*>\s*Working in <strong[^>]*>new\.crew@riverside\.test<\/strong> as owner\s*· Field plan/);
   });
 
   test('does refuse a used link, signed-out API calls, crew on owner APIs and cross-site posts', async () => {
