@@ -38,7 +38,10 @@ function get(url: string, headers: Record<string, string> = {}, method = 'GET'):
 /** The first built asset in dist/client/_astro whose name ends with `suffix`. */
 function asset(suffix: string): { url: string; bytes: Buffer } {
   const dir = path.resolve('dist/client/_astro');
-  const name = fs.readdirSync(dir).find((f) => f.endsWith(suffix));
+  // One over the 1 KB threshold: smaller files are sent as they are.
+  const name = fs
+    .readdirSync(dir)
+    .find((f) => f.endsWith(suffix) && fs.statSync(path.join(dir, f)).size > 4096);
   if (!name) throw new Error(`no built asset ending ${suffix}`);
   return { url: `/_astro/${name}`, bytes: fs.readFileSync(path.join(dir, name)) };
 }

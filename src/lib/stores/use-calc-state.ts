@@ -45,7 +45,7 @@ export function useCalcState<T extends ShareState>(
   const [start, setStart] = useState<UnitSystem>('metric');
   const [state, setState] = useState<T>(defaults);
   const [loaded, setLoaded] = useState(false);
-  const base = start === 'us' ? { ...defaults, ...usStart } : defaults;
+  const startValues = (system: UnitSystem): T => (system === 'us' ? { ...defaults, ...usStart } : defaults);
   useEffect(() => {
     const search = window.location.search;
     const from = startOf(search, $unitSystem.get());
@@ -53,7 +53,7 @@ export function useCalcState<T extends ShareState>(
     startTransition(() => {
       setStart(from);
       if (search || from === 'us') {
-        setState(decodeShare(search, from === 'us' ? { ...defaults, ...usStart } : defaults, rowTemplates));
+        setState(decodeShare(search, startValues(from), rowTemplates));
       }
       setLoaded(true);
     });
@@ -63,7 +63,7 @@ export function useCalcState<T extends ShareState>(
   const rowKeys = Object.fromEntries(
     Object.entries(rowTemplates).map(([k, t]) => [k, Object.keys(t)]),
   );
-  const query = shareQuery(state, start, base, rowKeys);
+  const query = shareQuery(state, start, startValues(start), rowKeys);
   useEffect(() => {
     if (!loaded) return;
     const url = `${window.location.pathname}?${query}${window.location.hash}`;
