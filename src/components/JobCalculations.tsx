@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { ReactElement } from 'react';
-import { api, reopenHref } from '../lib/jobs/client-api';
+import { TOOL_NAMES, api, reopenHref } from '../lib/jobs/client-api';
 import { headlineOf } from '../lib/jobs/headline';
 
 export interface Calc {
@@ -20,7 +20,6 @@ interface Change { path: string; before: unknown; after: unknown }
 interface Rerun { engineVersion?: string; changes?: Change[]; error?: { message?: string } }
 
 const btn = 'min-h-11 rounded-md border border-rule bg-white px-3';
-const TOOL_NAMES = { line: 'Gravity line', siphon: 'Siphon', drain: 'Drain-down' } as const;
 const TONE_BORDER = { runs: 'border-verdict-runs', edge: 'border-verdict-edge', fails: 'border-verdict-fails' } as const;
 
 /** The saved result in a line: verdict word, then the key figures in the units it was saved in. */

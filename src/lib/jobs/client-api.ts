@@ -15,6 +15,8 @@ export async function api<T>(url: string, init?: { method?: string; body?: unkno
 }
 
 export const TOOL_PAGES = { line: '/gravity-line', siphon: '/siphon', drain: '/drain' } as const;
+/** Each saved tool's name, as the job page and the report show it. */
+export const TOOL_NAMES = { line: 'Gravity line', siphon: 'Siphon', drain: 'Drain-down' } as const;
 
 /** Link that reopens a saved calculation in its tool, marked so a save there becomes a revision. */
 export function reopenHref(c: { id: string; jobId: string; tool: keyof typeof TOOL_PAGES; openPath: string | null }): string {

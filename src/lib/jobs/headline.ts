@@ -7,8 +7,9 @@ import type { QuantityKind, UnitSystem } from '../hydraulics/units';
 import { formatQuantity } from '../hydraulics/units';
 import { drainVerdict, lineVerdict, siphonVerdict } from '../calculators/verdict';
 import type { Verdict } from '../calculators/verdict';
+import type { TOOL_NAMES } from './client-api';
 
-export type SavedTool = 'line' | 'siphon' | 'drain';
+export type SavedTool = keyof typeof TOOL_NAMES;
 
 export interface Headline {
   verdict: Verdict | null;

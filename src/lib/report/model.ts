@@ -1,4 +1,5 @@
 import { cautionsFor } from '../cautions';
+import { TOOL_NAMES } from '../jobs/client-api';
 import type { Caution } from '../cautions';
 import type { BrandRow } from '../data/brands';
 import type { CalculationRow } from '../data/calculations';
@@ -34,7 +35,6 @@ export interface ReportModel {
   generatedAt: Date;
 }
 
-const TOOL_NAMES = { line: 'Gravity line', siphon: 'Siphon', drain: 'Drain-down' } as const;
 
 /** The unit kind of an API field, from its SI suffix. */
 function kindOf(key: string): QuantityKind | null {
