@@ -9,6 +9,7 @@
  * the US start did), and only a bare address starts the visitor on their own.
  */
 import type { UnitSystem } from './hydraulics/units';
+import { isUnitSystem } from './hydraulics/units';
 
 /** A calculator's inputs: flat, numbers in SI, choices as strings, lists as arrays of records. */
 export type ShareValue = number | string | boolean | ShareRow[];
@@ -98,7 +99,7 @@ export const START_KEY = 'start';
 export function startOf(query: string, own: UnitSystem): UnitSystem {
   const q = new URLSearchParams(query);
   const named = q.get(START_KEY);
-  if (named === 'us' || named === 'metric') return named;
+  if (isUnitSystem(named)) return named;
   return q.keys().next().done ? own : 'metric';
 }
 

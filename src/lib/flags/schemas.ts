@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { unitSystems } from '../hydraulics/units';
 import { FLAG_REASONS, FLAG_STATUSES, FLAG_TOOLS } from '../../../db/schema/flags';
 
 /** Largest snapshot part we keep, in characters of JSON (a drain curve of 2000 points fits). */
@@ -19,7 +20,7 @@ export const newFlagSchema = z.object({
     inputs: jsonObject,
     results: jsonObject,
     engineVersion: z.string().trim().min(1).max(40),
-    unitSystem: z.enum(['metric', 'us']),
+    unitSystem: z.enum(unitSystems),
     page: z
       .string()
       .max(300)

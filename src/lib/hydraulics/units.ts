@@ -12,7 +12,12 @@
 
 export type UnitSystem = 'metric' | 'us';
 
-export const unitSystems: readonly UnitSystem[] = ['metric', 'us'];
+export const unitSystems = ['metric', 'us'] as const satisfies readonly UnitSystem[];
+
+/** Whether a value read from outside (storage, a link, a page attribute) names a unit system. */
+export function isUnitSystem(value: unknown): value is UnitSystem {
+  return (unitSystems as readonly unknown[]).includes(value);
+}
 
 export type QuantityKind =
   | 'length'

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { unitSystems } from '../hydraulics/units';
 import { JOB_STATUSES } from '../../../db/schema';
 import { JOB_SORTS } from '../data/jobs';
 
@@ -45,7 +46,7 @@ export const calculationCreateSchema = z.strictObject({
   label: text(200).default(''),
   /** The engine request; validated by running the engine on it. */
   inputs: z.record(z.string(), z.unknown()),
-  unitSystem: z.enum(['metric', 'us']),
+  unitSystem: z.enum(unitSystems),
   revisionOf: z.string().max(100).optional(),
   openPath: z.string().max(4000).regex(OPEN_PATH, 'must be a calculator link').optional(),
 });

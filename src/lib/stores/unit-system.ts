@@ -8,6 +8,7 @@
  */
 import { atom } from 'nanostores';
 import type { UnitSystem } from '../hydraulics/units';
+import { isUnitSystem } from '../hydraulics/units';
 
 export const UNIT_STORAGE_KEY = 'drainwright:units';
 
@@ -16,12 +17,10 @@ export function unitSystemForLanguage(language: string | undefined): UnitSystem 
   return /^en-US\b/i.test(language ?? '') ? 'us' : 'metric';
 }
 
-const isSystem = (v: unknown): v is UnitSystem => v === 'metric' || v === 'us';
-
 /** The account's unit system named on this page, copied to this browser; null when none is. */
 export function adoptAccountUnits(): UnitSystem | null {
   const account = document.documentElement.dataset.accountUnits;
-  if (!isSystem(account)) return null;
+  if (!isUnitSystem(account)) return null;
   remember(account);
   return account;
 }
@@ -32,7 +31,7 @@ function initial(): UnitSystem {
   if (account) return account;
   try {
     const saved = window.localStorage.getItem(UNIT_STORAGE_KEY);
-    if (isSystem(saved)) return saved;
+    if (isUnitSystem(saved)) return saved;
   } catch {
     // storage blocked (private mode): fall back to the language
   }

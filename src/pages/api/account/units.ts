@@ -1,9 +1,10 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { saveUnitSystem } from '../../../lib/data/users';
+import { unitSystems } from '../../../lib/hydraulics/units';
 import { handle, jsonBody, parseWith } from '../../../lib/jobs/http';
 
-const unitsSchema = z.strictObject({ unit_system: z.enum(['metric', 'us']) });
+const unitsSchema = z.strictObject({ unit_system: z.enum(unitSystems) });
 
 /**
  * Remember the crew's unit system on their account. The calculators send every switch here
