@@ -1,4 +1,5 @@
 import fs from 'node:fs';
+import http from 'node:http';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startApp } from '../helpers/server';
@@ -126,6 +127,25 @@ describe('structured request logs', () => {
       expect(line.path).toBe(logged);
       expect(line.level).toBe(res.status >= 500 ? 'error' : res.status >= 400 ? 'warn' : 'info');
     }
+  });
+
+  test('does not pile up listeners on a keep-alive socket serving prerendered pages', async () => {
+    // One socket, many page loads: a browser fetching a page and its assets does this. Node
+    // warns past 10 listeners of one kind on one emitter (its documented default).
+    const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+    const get = (p: string): Promise<number> =>
+      new Promise((resolve, reject) => {
+        http
+          .get(`${app.url}${p}`, { agent }, (res) => {
+            res.resume();
+            res.on('end', () => resolve(res.statusCode ?? 0));
+          })
+          .on('error', reject);
+      });
+    for (let i = 0; i < 15; i++) expect(await get(i % 2 ? '/siphon' : '/pricing')).toBe(200);
+    agent.destroy();
+    await new Promise((r) => setTimeout(r, 300));
+    expect(app.output()).not.toContain('MaxListenersExceededWarning');
   });
 
   test('does keep secrets, tokens, cookies, the sign-in link and stacks out of the output', () => {

@@ -8,6 +8,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { getConfig } from '../config';
 import { trackRequest } from '../server/access-log';
+import { releaseAstroRequest } from '../server/astro-request-release';
 import { serveApiV1 } from '../server/api-fast-path';
 import { closeIfBodyUnread, refuseOversizedBody } from '../server/body-limit';
 import { compress } from '../server/compression';
@@ -44,6 +45,7 @@ async function main(): Promise<void> {
     // page machinery.
     if (serveApiV1(req, res, apiHeaders)) return;
     const id = trackRequest(req, res);
+    releaseAstroRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);
     if (refuseOversizedBody(req, res)) return;
     closeOnUnreadBody(req, res);
