@@ -10,6 +10,7 @@ import type { DrainResult } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
+import { cautionIdsFor } from '../lib/cautions';
 import ChartPanel from './ChartPanel';
 import DrainHints from './DrainHints';
 import type { SolvedDrain } from './DrainHints';
@@ -100,13 +101,7 @@ export default function DrainTool(): ReactElement {
       </InputGroup>
     </>
   );
-  const cautions = [
-    'edges-and-confined-spaces',
-    ...(s.outlet === 'siphon' ? ['no-mouth-priming'] : []),
-    ...(s.outlet !== 'orifice' ? ['intake-entrapment'] : []),
-    'discharge',
-    'estimates',
-  ];
+  const cautions = cautionIdsFor({ tool: 'drain', outlet: s.outlet });
   const result =
     'error' in out ? (
       <InputProblem text={out.error} />

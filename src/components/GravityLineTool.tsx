@@ -11,6 +11,7 @@ import type { UnitSystem } from '../lib/hydraulics';
 import { formatQuantity, solveLine } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
+import { cautionIdsFor } from '../lib/cautions';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
 import LineFields from './LineFields';
@@ -94,7 +95,7 @@ export default function GravityLineTool(): ReactElement {
           </p>
         )}
         <WarningList warnings={out.r.warnings} />
-        <CautionNotes ids={['intake-entrapment', 'discharge', 'estimates']} />
+        <CautionNotes ids={cautionIdsFor({ tool: 'line' })} />
         <ResultActions
           tool="line"
           inputs={out.req}

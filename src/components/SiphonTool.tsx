@@ -17,6 +17,7 @@ import {
 } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
+import { cautionIdsFor } from '../lib/cautions';
 import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
@@ -153,7 +154,7 @@ export default function SiphonTool(): ReactElement {
         )}
       </ul>
       <WarningList warnings={r.warnings} />
-      <CautionNotes ids={['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates']} />
+      <CautionNotes ids={cautionIdsFor({ tool: 'siphon' })} />
       <ResultActions
         tool="siphon"
         inputs={out.req}

@@ -12,7 +12,12 @@ export const CAUTIONS: readonly Caution[] = [
   {
     id: 'no-mouth-priming',
     title: 'Never prime by mouth',
-    text: 'Fill the hose by submerging it, with a hand pump or a priming valve. Pond, flood and tank water is contaminated: treat it as sewage.',
+    text: 'Fill the hose by submerging it, with a hand pump or a priming valve. A mouthful of pond, flood or tank water can make you ill.',
+  },
+  {
+    id: 'contaminated-water',
+    title: 'Treat the water as contaminated',
+    text: 'Pond, flood, trench and tank water can carry sewage, chemicals and germs. Wear gloves and eye protection, wash before eating, and keep these hoses apart from drinking-water ones.',
   },
   {
     id: 'intake-entrapment',
@@ -39,4 +44,28 @@ export const CAUTIONS: readonly Caution[] = [
 /** Cautions by id, in the order given. */
 export function cautionsFor(ids: readonly string[]): Caution[] {
   return ids.map((id) => CAUTIONS.find((c) => c.id === id)).filter((c): c is Caution => !!c);
+}
+
+/** What a calculation moves the water through: a tool, and for a drain its outlet when known. */
+export type CautionSetup =
+  | { tool: 'siphon' | 'line' }
+  | { tool: 'drain'; outlet?: 'orifice' | 'line' | 'siphon' };
+
+/**
+ * The cautions that apply to one set-up, most urgent first. Every job handles open or stored
+ * water near an edge, so contamination and edges always apply; priming only to a siphon, the
+ * intake only to a hose or pipe. A drain whose outlet is not known gets all of them.
+ */
+export function cautionIdsFor(setup: CautionSetup): string[] {
+  const outlet = setup.tool === 'drain' ? setup.outlet : setup.tool;
+  const siphon = outlet === undefined || outlet === 'siphon';
+  const intake = outlet !== 'orifice';
+  return [
+    ...(siphon ? ['no-mouth-priming'] : []),
+    'contaminated-water',
+    ...(intake ? ['intake-entrapment'] : []),
+    'edges-and-confined-spaces',
+    'discharge',
+    'estimates',
+  ];
 }

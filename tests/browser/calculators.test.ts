@@ -42,7 +42,9 @@ describe('quick check on a phone', () => {
       const cautions = await page.locator('[data-caution]').evaluateAll((els) => els.map((e) => e.getAttribute('data-caution')));
       expect(cautions).toContain('estimates');
       if (mode === 'siphon') expect(cautions).toContain('no-mouth-priming');
-      if (mode === 'tank') expect(cautions).toContain('edges-and-confined-spaces');
+      // Product brief: contaminated water and edges apply to every job, not only to one mode.
+      expect(cautions).toContain('contaminated-water');
+      expect(cautions).toContain('edges-and-confined-spaces');
       expect(await sidewaysOverflow(page)).toBeLessThanOrEqual(0);
       const small = await page.locator('button, input:not(.sr-only), select, label:has(input.sr-only)').evaluateAll((els) =>
         els.filter((e) => e.getBoundingClientRect().height > 0 && e.getBoundingClientRect().height < 44).length,

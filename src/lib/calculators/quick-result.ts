@@ -10,6 +10,7 @@ import type { QuickState } from './quick-check';
 import { quickDrainRequest, quickLineRequest, quickSiphonRequest } from './quick-check';
 import type { Verdict } from './verdict';
 import { drainVerdict, lineVerdict, siphonVerdict } from './verdict';
+import { cautionIdsFor } from '../cautions';
 
 export interface Figure {
   id: string;
@@ -60,7 +61,7 @@ function siphonAnswer(s: QuickState, d: number, mat: string): QuickAnswer {
     biggest: biggestLoss(r.losses_m),
     crestMarginM: r.status === 'no_flow' ? undefined : crestMarginM(r, RHO_15C),
     warnings: r.warnings,
-    cautions: ['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates'],
+    cautions: cautionIdsFor({ tool: 'siphon' }),
     raw: r,
   };
 }
@@ -76,7 +77,7 @@ function lineAnswer(s: QuickState, d: number, mat: string): QuickAnswer {
     ],
     biggest: biggestLoss(r.losses_m),
     warnings: r.warnings,
-    cautions: ['intake-entrapment', 'discharge', 'estimates'],
+    cautions: cautionIdsFor({ tool: 'line' }),
     raw: r,
   };
 }
@@ -94,12 +95,7 @@ function tankAnswer(s: QuickState, d: number, mat: string): QuickAnswer {
     ],
     biggest: null,
     warnings: r.warnings,
-    cautions: [
-      'edges-and-confined-spaces',
-      ...(hose ? ['intake-entrapment'] : []),
-      'discharge',
-      'estimates',
-    ],
+    cautions: cautionIdsFor({ tool: 'drain', outlet: hose ? 'line' : 'orifice' }),
     raw: r,
   };
 }

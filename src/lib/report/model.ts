@@ -1,4 +1,4 @@
-import { cautionsFor } from '../cautions';
+import { cautionIdsFor, cautionsFor } from '../cautions';
 import { TOOL_NAMES } from '../jobs/client-api';
 import type { Caution } from '../cautions';
 import type { BrandRow } from '../data/brands';
@@ -97,11 +97,13 @@ function figuresFor(c: CalculationRow, accent: string): Figure[] {
   return figs;
 }
 
-const CAUTION_IDS = {
-  siphon: ['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates'],
-  line: ['intake-entrapment', 'discharge', 'estimates'],
-  drain: ['no-mouth-priming', 'edges-and-confined-spaces', 'discharge', 'estimates'],
-} as const;
+/** The cautions of a saved calculation; a drain's follow its outlet (orifice, line, siphon). */
+function cautionsOf(c: CalculationRow): ReturnType<typeof cautionsFor> {
+  if (c.tool !== 'drain') return cautionsFor(cautionIdsFor({ tool: c.tool }));
+  const type = (c.inputs as { outlet?: { type?: unknown } }).outlet?.type;
+  const outlet = type === 'orifice' || type === 'line' || type === 'siphon' ? type : undefined;
+  return cautionsFor(cautionIdsFor({ tool: 'drain', outlet }));
+}
 
 function reportCalc(c: CalculationRow, accent: string): ReportCalculation {
   const res = c.results as Record<string, unknown>;
@@ -114,7 +116,7 @@ function reportCalc(c: CalculationRow, accent: string): ReportCalculation {
     results: resultRows(res, c.unitSystem),
     warnings: ((res.warnings as { message: string }[] | undefined) ?? []).map((w) => w.message),
     figures: figuresFor(c, accent),
-    cautions: cautionsFor(CAUTION_IDS[c.tool]),
+    cautions: cautionsOf(c),
   };
 }
 
