@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 import type { ReactElement } from 'react';
-import { api } from '../lib/jobs/client-api';
+import { ApiError, api } from '../lib/jobs/client-api';
 
 interface Props {
   tool: 'line' | 'siphon' | 'drain';
@@ -12,6 +12,29 @@ interface Props {
   label?: string;
 }
 interface JobLite { id: string; title: string }
+/** Why saving cannot happen here: signed out, or an account without the Crew plan. */
+type Blocked = 'signed-out' | 'plan';
+
+function blockedBy(e: Error): Blocked | null {
+  if (!(e instanceof ApiError)) return null;
+  if (e.status === 401) return 'signed-out';
+  return e.status === 403 && e.code === 'plan_required' ? 'plan' : null;
+}
+
+/** Instead of a form that cannot work: what saving needs, with the way there. The calculation stays on the page. */
+function SaveBlocked({ why }: { why: Blocked }): ReactElement {
+  const here = `${location.pathname}${location.search}`;
+  const link = 'inline-flex min-h-11 items-center rounded-md px-4 font-semibold';
+  return (
+    <div role="status" className="grid gap-2 rounded-lg border border-rule bg-paper p-3" data-save-blocked={why}>
+      <p>{why === 'signed-out' ? 'Saving jobs needs a Crew account. Sign in and this calculation stays on the page.' : 'Saved jobs are part of the Crew plan.'}</p>
+      <p className="flex flex-wrap gap-2">
+        {why === 'signed-out' && <a className={`${link} bg-teal-deep text-white`} href={`/signin?next=${encodeURIComponent(here)}`}>Sign in</a>}
+        <a className={`${link} border border-teal text-teal-deep`} href="/pricing">See the plans</a>
+      </p>
+    </div>
+  );
+}
 
 /**
  * "Save to a job": stores the calculation in a new or an existing job. Opened from a job's
@@ -26,6 +49,7 @@ export default function SaveToJob({ tool, inputs, unitSystem, openPath, label = 
   const [msg, setMsg] = useState<{ text: string; href?: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const [revise, setRevise] = useState<string | null>(null);
+  const [blocked, setBlocked] = useState<Blocked | null>(null);
 
   useEffect(() => {
     const q = new URLSearchParams(location.search);
@@ -36,7 +60,12 @@ export default function SaveToJob({ tool, inputs, unitSystem, openPath, label = 
     if (!open || jobs) return;
     api<{ items: JobLite[] }>('/api/jobs?pageSize=100')
       .then((r) => setJobs(r.items))
-      .catch((e: Error) => { setJobs([]); setMsg({ text: /sign in/i.test(e.message) || e.message.includes('401') ? 'Sign in with a Crew account to save jobs.' : e.message }); });
+      .catch((e: Error) => {
+        setJobs([]);
+        const why = blockedBy(e);
+        if (why) setBlocked(why);
+        else setMsg({ text: e.message });
+      });
   }, [open, jobs]);
 
   const save = async (): Promise<void> => {
@@ -48,7 +77,9 @@ export default function SaveToJob({ tool, inputs, unitSystem, openPath, label = 
       await api(`/api/jobs/${jobId}/calculations`, { method: 'POST', body });
       setMsg({ text: 'Saved to the job.', href: `/app/jobs/${jobId}` });
     } catch (e) {
-      setMsg({ text: (e as Error).message });
+      const why = blockedBy(e as Error);
+      if (why) setBlocked(why);
+      else setMsg({ text: (e as Error).message });
     } finally {
       setBusy(false);
     }
@@ -56,6 +87,7 @@ export default function SaveToJob({ tool, inputs, unitSystem, openPath, label = 
 
   const field = 'min-h-11 w-full rounded-md border border-rule bg-white px-3';
   if (!open) return <button type="button" className="min-h-11 rounded-md border border-teal px-4 font-semibold text-teal-deep" onClick={() => setOpen(true)}>Save to a job</button>;
+  if (blocked) return <SaveBlocked why={blocked} />;
   return (
     <form className="grid gap-2 rounded-lg border border-rule bg-paper p-3" onSubmit={(e) => { e.preventDefault(); void save(); }} aria-label="Save to a job">
       <label className="grid gap-1">Job

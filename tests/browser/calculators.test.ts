@@ -94,6 +94,20 @@ describe('quick check on a phone', () => {
     expect(await page.getByRole('button', { name: 'US units' }).getAttribute('aria-pressed')).toBe('true');
   });
 
+  test('does offer sign-in, not a form that fails, when a signed-out crew taps Save to a job', async () => {
+    const page = await (await phoneContext(browser, app.url)).newPage();
+    await openHydrated(page, '/check');
+    await calculatorReady(page);
+    const before = await figure(page, 'flow');
+    await page.getByRole('button', { name: 'Save to a job' }).click();
+    const prompt = page.locator('[data-save-blocked="signed-out"]');
+    await prompt.waitFor();
+    expect(await page.locator('form[aria-label="Save to a job"]').count()).toBe(0);
+    const href = await prompt.getByRole('link', { name: 'Sign in' }).getAttribute('href');
+    expect(href).toMatch(/^\/signin\?next=%2Fcheck/);
+    expect(await figure(page, 'flow')).toBe(before);
+  });
+
   test('does look right at 360 px (screenshot kept for review)', async () => {
     const page = await (await phoneContext(browser, app.url)).newPage();
     await openHydrated(page, '/check');

@@ -1,4 +1,15 @@
-/** Browser-side calls to the jobs API; every failure becomes an Error with the server's words. */
+/** A failed call: the server's words, its status and its error code (e.g. plan_required). */
+export class ApiError extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly code?: string,
+  ) {
+    super(message);
+  }
+}
+
+/** Browser-side calls to the jobs API; every failure becomes an ApiError with the server's words. */
 export async function api<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
   const r = await fetch(url, {
     method: init?.method ?? 'GET',
@@ -9,7 +20,7 @@ export async function api<T>(url: string, init?: { method?: string; body?: unkno
   const body = await r.json().catch(() => ({}));
   if (!r.ok) {
     const issues = (body.issues as { path: string; message: string }[] | undefined)?.map((i) => `${i.path} ${i.message}`).join('; ');
-    throw new Error(issues || body.message || `Request failed (${r.status}).`);
+    throw new ApiError(issues || body.message || `Request failed (${r.status}).`, r.status, body.error);
   }
   return body as T;
 }
