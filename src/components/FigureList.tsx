@@ -1,7 +1,7 @@
 import type { ReactElement } from 'react';
 import type { Figure } from '../lib/calculators/quick-result';
+import { figureValue } from '../lib/calculators/quick-result';
 import type { UnitSystem } from '../lib/hydraulics/units';
-import { formatQuantity } from '../lib/hydraulics/units';
 
 /** Result figures: label, number with its unit, and a note. */
 export default function FigureList({ figures, system }: { figures: Figure[]; system: UnitSystem }): ReactElement {
@@ -11,7 +11,7 @@ export default function FigureList({ figures, system }: { figures: Figure[]; sys
         <div key={f.id} className="min-w-0 rounded-lg border border-rule bg-white p-3">
           <dt className="text-step--1 font-semibold text-ink-soft">{f.label}</dt>
           <dd className="text-step-1 leading-tight font-extrabold tabular-nums sm:text-step-2" data-figure={f.id}>
-            {Number.isFinite(f.si) ? formatQuantity(f.kind, f.si, system) : 'never'}
+            {figureValue(f, system)}
           </dd>
           {f.note && <dd className="text-step--1 text-ink-faint">{f.note}</dd>}
         </div>

@@ -3,7 +3,7 @@ import type { ReactElement } from 'react';
 import type { QuickMode, QuickState } from '../lib/calculators/quick-check';
 import { QUICK_DEFAULTS, QUICK_US_START } from '../lib/calculators/quick-check';
 import type { QuickAnswer } from '../lib/calculators/quick-result';
-import { quickAnswer } from '../lib/calculators/quick-result';
+import { figureValue, quickAnswer } from '../lib/calculators/quick-result';
 import { quickFlag } from '../lib/flags/quick-flag';
 import type { UnitSystem } from '../lib/hydraulics/units';
 import { formatQuantity } from '../lib/hydraulics/units';
@@ -101,7 +101,7 @@ export default function QuickCheck(): ReactElement {
           word={answer.verdict.word}
           detail={answer.figures
             .slice(0, 2)
-            .map((f) => (Number.isFinite(f.si) ? formatQuantity(f.kind, f.si, system) : 'never'))
+            .map((f) => figureValue(f, system))
             .join(' · ')}
           target={resultRef}
         />

@@ -18,6 +18,7 @@ import {
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
 import { cautionIdsFor } from '../lib/cautions';
+import { crestPressureFigure, leadWithCrestWhenBroken, siphonFlowFigure } from '../lib/calculators/siphon-figures';
 import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
@@ -102,14 +103,9 @@ export default function SiphonTool(): ReactElement {
   if ('error' in out)
     return <ToolLayout inputs={inputs} result={<InputProblem text={out.error!} />} />;
   const { r } = out;
-  const figures = [
-    ...lineFigures(r),
-    {
-      id: 'crest-pressure',
-      label: 'Pressure at the crest',
-      kind: 'pressure' as const,
-      si: r.crest_pressure_abs_pa,
-    },
+  const figures = leadWithCrestWhenBroken(r, [
+    ...lineFigures(r).map((f) => (f.id === 'flow' ? siphonFlowFigure(r) : f)),
+    crestPressureFigure(r),
     {
       id: 'crest-limit',
       label: 'Working limit at the crest',
@@ -125,7 +121,7 @@ export default function SiphonTool(): ReactElement {
       note: 'where crest pressure meets vapour pressure',
     },
     { id: 'priming', label: 'Water to prime', kind: 'volume' as const, si: r.priming_volume_m3 },
-  ];
+  ]);
   const result = (
     <>
       <VerdictBanner verdict={siphonVerdict(r)} />

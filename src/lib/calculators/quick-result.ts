@@ -11,13 +11,24 @@ import { quickDrainRequest, quickLineRequest, quickSiphonRequest } from './quick
 import type { Verdict } from './verdict';
 import { drainVerdict, lineVerdict, siphonVerdict } from './verdict';
 import { cautionIdsFor } from '../cautions';
+import type { UnitSystem } from '../hydraulics/units';
+import { formatQuantity } from '../hydraulics/units';
+import { crestPressureFigure, leadWithCrestWhenBroken, siphonFlowFigure } from './siphon-figures';
 
 export interface Figure {
   id: string;
   label: string;
   kind: QuantityKind;
   si: number;
+  /** Words shown instead of the number, when the number would mislead. */
+  text?: string;
   note?: string;
+}
+
+/** A figure's value as shown: its words, "never" for an endless time, else number and unit. */
+export function figureValue(f: Figure, system: UnitSystem): string {
+  if (f.text) return f.text;
+  return Number.isFinite(f.si) ? formatQuantity(f.kind, f.si, system) : 'never';
 }
 
 export interface QuickAnswer {
@@ -52,12 +63,12 @@ function siphonAnswer(s: QuickState, d: number, mat: string): QuickAnswer {
   const r = solveSiphon(quickSiphonRequest(s, d, mat));
   return {
     verdict: siphonVerdict(r),
-    figures: [
-      { id: 'flow', label: 'Flow', kind: 'flow', si: r.flow_m3_s },
+    figures: leadWithCrestWhenBroken(r, [
+      siphonFlowFigure(r),
       timeFigure(s.volume_m3, r.status === 'runs' || r.status === 'marginal' ? r.flow_m3_s : 0),
-      { id: 'crest-pressure', label: 'Pressure at the crest', kind: 'pressure', si: r.crest_pressure_abs_pa },
+      crestPressureFigure(r),
       { id: 'priming', label: 'Water to prime the hose', kind: 'volume', si: r.priming_volume_m3 },
-    ],
+    ]),
     biggest: biggestLoss(r.losses_m),
     crestMarginM: r.status === 'no_flow' ? undefined : crestMarginM(r, RHO_15C),
     warnings: r.warnings,
