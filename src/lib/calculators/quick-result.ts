@@ -5,7 +5,8 @@
 import type { DrainResult, LineResult, QuantityKind, SiphonResult, Warning } from '../hydraulics';
 import { EngineInputError, findSize, solveDrain, solveLine, solveSiphon, waterProperties } from '../hydraulics';
 import type { BiggestLoss } from './limits';
-import { biggestLoss, crestMarginM } from './limits';
+import { biggestLoss } from './limits';
+import { quickCrestMarginM } from './quick-crest-margin';
 import type { QuickState } from './quick-check';
 import { quickDrainRequest, quickLineRequest, quickSiphonRequest } from './quick-check';
 import type { Verdict } from './verdict';
@@ -70,7 +71,7 @@ function siphonAnswer(s: QuickState, d: number, mat: string): QuickAnswer {
       { id: 'priming', label: 'Water to prime the hose', kind: 'volume', si: r.priming_volume_m3 },
     ]),
     biggest: biggestLoss(r.losses_m),
-    crestMarginM: r.status === 'no_flow' ? undefined : crestMarginM(r, RHO_15C),
+    crestMarginM: r.status === 'no_flow' ? undefined : quickCrestMarginM(s, d, mat, RHO_15C),
     warnings: r.warnings,
     cautions: cautionIdsFor({ tool: 'siphon' }),
     raw: r,
