@@ -12,8 +12,7 @@ export interface Separators {
 }
 
 export type NumberRead =
-  | { ok: true; value: number }
-  | { ok: false; empty: boolean; problem: string };
+  { ok: true; value: number } | { ok: false; empty: boolean; problem: string };
 
 const SPACES = /[\s\u00a0\u202f]/;
 const APOSTROPHES = /['\u2019]/;
@@ -65,21 +64,37 @@ function asGrouped(runs: string[], seps: string[], groupable: Set<string>): stri
 }
 
 /** "123.45" when the last separator is the decimal mark and any before it group digits. */
-function asDecimal(runs: string[], seps: string[], decimals: Set<string>, groupable: Set<string>): string | null {
+function asDecimal(
+  runs: string[],
+  seps: string[],
+  decimals: Set<string>,
+  groupable: Set<string>,
+): string | null {
   const mark = seps[seps.length - 1];
   if (mark === undefined || !decimals.has(mark)) return null;
   const whole = runs.slice(0, -1);
   const groups = seps.slice(0, -1);
-  const groupsOk = groups.every((s) => s === groups[0] && s !== mark && groupable.has(s)) && groupsValid(whole);
+  const groupsOk =
+    groups.every((s) => s === groups[0] && s !== mark && groupable.has(s)) && groupsValid(whole);
   if (groups.length > 0 && !groupsOk) return null;
   return `${whole.join('') || '0'}.${runs[runs.length - 1] || '0'}`;
 }
 
-const NAMES: Record<string, string> = { '.': 'a point', ',': 'a comma', ' ': 'a space', "'": 'an apostrophe' };
+const NAMES: Record<string, string> = {
+  '.': 'a point',
+  ',': 'a comma',
+  ' ': 'a space',
+  "'": 'an apostrophe',
+};
 const nameOf = (ch: string): string => NAMES[classOf(ch)] ?? `“${ch}”`;
 
 /** Why an entry made only of digits and separators is still not one number. */
-function problemFor(body: string, seps: Separators, groupable: Set<string>, decimals: Set<string>): string {
+function problemFor(
+  body: string,
+  seps: Separators,
+  groupable: Set<string>,
+  decimals: Set<string>,
+): string {
   const example = `1${seps.group}500${seps.decimal}5`;
   const groupOnly = (c: string): boolean => groupable.has(classOf(c)) && !decimals.has(classOf(c));
   const lastSep = [...body].reverse().find((c) => /\D/.test(c));
@@ -87,25 +102,36 @@ function problemFor(body: string, seps: Separators, groupable: Set<string>, deci
     const marks = [...decimals].map(nameOf).join(' or ');
     return `Use ${marks} for decimals; here ${nameOf(lastSep)} groups thousands, as in ${example}`;
   }
-  if ([...body].some(groupOnly)) return `Group thousands in threes, as in ${example}, or leave the separator out`;
+  if ([...body].some(groupOnly))
+    return `Group thousands in threes, as in ${example}, or leave the separator out`;
   return `Type one number, like 2${seps.decimal}5`;
 }
 
 /** Read digits and separators (no sign, no exponent) into a plain decimal string. */
-function readBody(body: string, seps: Separators): { ok: true; digits: string } | { ok: false; problem: string } {
+function readBody(
+  body: string,
+  seps: Separators,
+): { ok: true; digits: string } | { ok: false; problem: string } {
   const decimals = new Set(['.', classOf(seps.decimal)]);
   const groupable = new Set([' ', classOf(seps.group)]);
-  const known = (c: string): boolean => /\d/.test(c) || decimals.has(classOf(c)) || groupable.has(classOf(c));
+  const known = (c: string): boolean =>
+    /\d/.test(c) || decimals.has(classOf(c)) || groupable.has(classOf(c));
   const t = [...body].every(known) ? tokens(body) : null;
-  if (!t || !/\d/.test(body)) return { ok: false, problem: `Type a number, like 2${seps.decimal}5` };
+  if (!t || !/\d/.test(body))
+    return { ok: false, problem: `Type a number, like 2${seps.decimal}5` };
   const grouped = asGrouped(t.runs, t.seps, groupable);
   const decimal = asDecimal(t.runs, t.seps, decimals, groupable);
   if (grouped !== null && decimal !== null && Number(grouped) !== Number(decimal)) {
     const a = String(Number(decimal)).replace('.', seps.decimal);
-    return { ok: false, problem: `Could be ${a} or ${Number(grouped)}: type it without a thousands separator` };
+    return {
+      ok: false,
+      problem: `Could be ${a} or ${Number(grouped)}: type it without a thousands separator`,
+    };
   }
   const digits = grouped ?? decimal;
-  return digits !== null ? { ok: true, digits } : { ok: false, problem: problemFor(body, seps, groupable, decimals) };
+  return digits !== null
+    ? { ok: true, digits }
+    : { ok: false, problem: problemFor(body, seps, groupable, decimals) };
 }
 
 /**

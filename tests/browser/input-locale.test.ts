@@ -80,16 +80,26 @@ describe('depth–area table on /drain in en-US', () => {
     await openHydrated(page, '/drain?shape=stage_table&outlet=orifice');
     const upload = page.getByTestId('stage-upload');
     const csv = 'depth (ft),area (ft²)\n0,"1,000"\n2,"1,500"\n4,"2,000"\n';
-    await upload.setInputFiles({ name: 'stage.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await upload.setInputFiles({
+      name: 'stage.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from(csv),
+    });
     await page.getByRole('alert').filter({ hasText: 'the table’s top depth, 4.00 ft' }).waitFor();
     await page.locator('input[name="initial_depth_m"]').fill('2');
     await expect.poll(() => figure(page, 'volume')).toBe('18\u202f700 US gal');
     const typed = await page.locator('textarea[name="stage"]').inputValue();
     const junk = Buffer.from(Array.from({ length: 300_000 }, (_, i) => (i * 7919 + 13) % 256));
-    await upload.setInputFiles({ name: 'photo.bin', mimeType: 'application/octet-stream', buffer: junk });
+    await upload.setInputFiles({
+      name: 'photo.bin',
+      mimeType: 'application/octet-stream',
+      buffer: junk,
+    });
     await page.getByTestId('stage-errors').waitFor();
     expect(await page.getByTestId('stage-errors').locator('li').count()).toBe(1);
-    expect(await page.getByTestId('stage-errors').textContent()).toMatch(/not a CSV text file.*unchanged/);
+    expect(await page.getByTestId('stage-errors').textContent()).toMatch(
+      /not a CSV text file.*unchanged/,
+    );
     expect(await page.locator('textarea[name="stage"]').inputValue()).toBe(typed);
     expect(await figure(page, 'volume')).toBe('18\u202f700 US gal');
     expect(errors).toEqual([]);

@@ -31,7 +31,8 @@ export type FieldRead = { ok: true; si: number } | { ok: false; empty: boolean; 
 /** Relative slack on a bound, so a value converted from °F or ft that lands a hair outside passes. */
 const BOUND_SLACK = 1e-9;
 
-const display = (si: number, f: FieldSpec): number => (f.kind ? toDisplay(f.kind, si, f.system) : si);
+const display = (si: number, f: FieldSpec): number =>
+  f.kind ? toDisplay(f.kind, si, f.system) : si;
 
 /** "Out of range: use 32 to 210.2 °F". */
 export function rangeText(range: FieldRange, f: FieldSpec): string {
@@ -45,11 +46,13 @@ export function readField(text: string, f: FieldSpec): FieldRead {
   const r = readNumberText(text, f.locale);
   if (!r.ok) return r;
   const si = f.kind ? fromDisplay(f.kind, r.value, f.system) : r.value;
-  if (!Number.isFinite(si)) return { ok: false, empty: false, problem: f.range ? rangeText(f.range, f) : 'Too large' };
+  if (!Number.isFinite(si))
+    return { ok: false, empty: false, problem: f.range ? rangeText(f.range, f) : 'Too large' };
   if (!f.range) return { ok: true, si };
   const [lo, hi] = f.range;
   const slack = BOUND_SLACK * Math.max(Math.abs(lo), Math.abs(hi), 1);
-  if (si < lo - slack || si > hi + slack) return { ok: false, empty: false, problem: rangeText(f.range, f) };
+  if (si < lo - slack || si > hi + slack)
+    return { ok: false, empty: false, problem: rangeText(f.range, f) };
   return { ok: true, si: Math.min(hi, Math.max(lo, si)) };
 }
 

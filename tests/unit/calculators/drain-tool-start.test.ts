@@ -35,6 +35,8 @@ describe('drain tool starting values for a depth–area table', () => {
 
   test('does name the vessel’s full depth for a box', () => {
     const s = { ...DRAIN_TOOL_DEFAULTS, initial_depth_m: 2 };
-    expect(startDepthProblem(s, 'metric')).toMatch(/no more than the vessel’s full depth, 1\.50 m\.$/);
+    expect(startDepthProblem(s, 'metric')).toMatch(
+      /no more than the vessel’s full depth, 1\.50 m\.$/,
+    );
   });
 });
