@@ -1,12 +1,18 @@
 import { lazy, useMemo } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState } from '../lib/calculators/drain-tool';
-import { DRAIN_TOOL_DEFAULTS, DRAIN_TOOL_US_START, STAGE_ROW, drainToolRequest } from '../lib/calculators/drain-tool';
+import {
+  DRAIN_TOOL_DEFAULTS,
+  DRAIN_TOOL_US_START,
+  STAGE_ROW,
+  drainToolRequest,
+  startDepthProblem,
+} from '../lib/calculators/drain-tool';
 import { inputErrorText } from '../lib/calculators/field-names';
 import type { Figure } from '../lib/calculators/quick-result';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { drainVerdict } from '../lib/calculators/verdict';
-import type { DrainResult } from '../lib/hydraulics';
+import type { DrainResult, UnitSystem } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
@@ -36,7 +42,9 @@ const STOP_WORDS: Record<DrainResult['stop_reason'], string> = {
   siphon_breaks: 'the siphon’s crest pressure reaches its limit',
 };
 
-function compute(s: DrainToolState): SolvedDrain | { error: string } {
+function compute(s: DrainToolState, system: UnitSystem): SolvedDrain | { error: string } {
+  const depthProblem = startDepthProblem(s, system);
+  if (depthProblem) return { error: depthProblem };
   try {
     const req = drainToolRequest(s);
     return { req, r: solveDrain(req), size: s.size, target: s.target_time_s };
@@ -76,7 +84,7 @@ export default function DrainTool(): ReactElement {
     { fittings: FITTING_ROW, stage: STAGE_ROW },
     DRAIN_TOOL_US_START,
   );
-  const out = useMemo(() => compute(s), [s]);
+  const out = useMemo(() => compute(s, figuresIn), [s, figuresIn]);
   const inputs = (
     <>
       <InputGroup title="Vessel, basin or pond">

@@ -1,5 +1,6 @@
 import { memo } from 'react';
 import type { ReactElement } from 'react';
+import { LINE_LENGTH_RANGE } from '../lib/calculators/field-input';
 import type { LineFieldsState } from '../lib/calculators/tool-state';
 import type { UnitSystem } from '../lib/hydraulics';
 import { fittings, materials, sizes } from '../lib/hydraulics';
@@ -58,6 +59,7 @@ function LineFields({ s, update, system }: Props): ReactElement {
         system={system}
         value={s.length_m}
         onChange={(v) => update({ length_m: v })}
+        range={LINE_LENGTH_RANGE}
       />
       <SelectField
         name="entrance"

@@ -1,7 +1,11 @@
 import { useEffect, useId, useState } from 'react';
 import type { ReactElement } from 'react';
+import type { FieldRange } from '../lib/calculators/field-input';
+import { readField } from '../lib/calculators/field-input';
 import type { QuantityKind, UnitSystem } from '../lib/hydraulics/units';
-import { fromDisplay, toDisplay, unitLabel } from '../lib/hydraulics/units';
+import { toDisplay, unitLabel } from '../lib/hydraulics/units';
+import { writeNumberText } from '../lib/number-text';
+import { useInputLocale } from '../lib/stores/use-input-locale';
 
 interface Props {
   label: string;
@@ -16,35 +20,32 @@ interface Props {
   hint?: string;
   /** Name used in the query string and by tests. */
   name?: string;
+  /** Lowest and highest SI value accepted; outside it the box says so in the crew's units. */
+  range?: FieldRange;
 }
 
-/** Up to 6 significant figures, no trailing zeros, so a converted value reads cleanly. */
-export function inputText(si: number, system: UnitSystem, kind?: QuantityKind): string {
-  const v = kind ? toDisplay(kind, si, system) : si;
-  return Number.isFinite(v) ? String(Number(v.toPrecision(6))) : '';
-}
-
-/** A typed number with a decimal comma or point; NaN when it is not one. */
-export function readTyped(text: string): number {
-  const t = text.trim().replace(',', '.');
-  return /^[-+]?(\d+\.?\d*|\.\d+)$/.test(t) ? Number(t) : NaN;
+/** Up to 6 significant figures, no trailing zeros, in the locale's decimal mark. */
+export function inputText(si: number, system: UnitSystem, kind?: QuantityKind, locale?: string): string {
+  return writeNumberText(kind ? toDisplay(kind, si, system) : si, locale);
 }
 
 /** A labelled number input in the crew's units, with the unit beside it. */
 export default function NumberField(p: Props): ReactElement {
   const id = useId();
-  const toSI = (v: number): number => (p.kind ? fromDisplay(p.kind, v, p.system) : v);
-  const [text, setText] = useState(() => inputText(p.value, p.system, p.kind));
-  const typed = readTyped(text);
+  const locale = useInputLocale();
+  const spec = { locale, system: p.system, kind: p.kind, unit: p.unit, range: p.range };
+  const [text, setText] = useState(() => inputText(p.value, p.system, p.kind, locale));
+  const typed = readField(text, spec);
   useEffect(() => {
-    const current = readTyped(text);
-    const same = Number.isFinite(current) && Math.abs(toSI(current) - p.value) <= 1e-9 * Math.abs(p.value);
-    if (!same) setText(inputText(p.value, p.system, p.kind));
-    // re-sync only when the value or the unit system changes from outside
+    const current = readField(text, spec);
+    const same = current.ok && Math.abs(current.si - p.value) <= 1e-9 * Math.abs(p.value);
+    if (!same) setText(inputText(p.value, p.system, p.kind, locale));
+    // re-sync only when the value, the unit system or the locale changes from outside
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [p.value, p.system]);
+  }, [p.value, p.system, locale]);
   const unit = p.kind ? unitLabel(p.kind, p.system) : p.unit;
-  const bad = text.trim() !== '' && !Number.isFinite(typed);
+  const problem = !typed.ok && !typed.empty ? typed.problem : null;
+  const bad = problem !== null;
   return (
     <div className="min-w-0">
       <label htmlFor={id} className="block font-semibold">
@@ -62,8 +63,8 @@ export default function NumberField(p: Props): ReactElement {
           aria-describedby={p.hint || bad ? `${id}-hint` : undefined}
           onChange={(e) => {
             setText(e.target.value);
-            const v = readTyped(e.target.value);
-            if (Number.isFinite(v)) p.onChange(toSI(v));
+            const r = readField(e.target.value, spec);
+            if (r.ok) p.onChange(r.si);
           }}
           className="min-h-12 w-full min-w-0 rounded-l-lg border border-rule bg-white px-3 text-step-1 tabular-nums"
         />
@@ -75,7 +76,7 @@ export default function NumberField(p: Props): ReactElement {
       </div>
       {(p.hint || bad) && (
         <p id={`${id}-hint`} className={`mt-1 text-step--1 ${bad ? 'font-semibold text-verdict-fails' : 'text-ink-faint'}`}>
-          {bad ? 'Type a number, like 2.5' : p.hint}
+          {problem ?? p.hint}
         </p>
       )}
     </div>

@@ -1,4 +1,5 @@
 import type { ReactElement } from 'react';
+import { LINE_LENGTH_RANGE } from '../lib/calculators/field-input';
 import type { QuickState } from '../lib/calculators/quick-check';
 import { QUICK_SIZE_FAMILIES } from '../lib/calculators/quick-check';
 import type { UnitSystem } from '../lib/hydraulics/units';
@@ -30,6 +31,7 @@ export default function QuickInputs({ s, update, system }: Props): ReactElement 
       system={system}
       value={s[key] as number}
       onChange={(v) => update({ [key]: v } as Partial<QuickState>)}
+      range={key === 'length_m' ? LINE_LENGTH_RANGE : undefined}
     />
   );
   const hose = (

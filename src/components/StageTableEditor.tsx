@@ -4,6 +4,7 @@ import type { StageRow } from '../lib/calculators/drain-tool';
 import type { UnitSystem } from '../lib/hydraulics';
 import { unitLabel } from '../lib/hydraulics';
 import { parseStageCsv, stageCsvText } from '../lib/stage-table-csv';
+import { useInputLocale } from '../lib/stores/use-input-locale';
 
 interface Props {
   rows: StageRow[];
@@ -14,21 +15,22 @@ interface Props {
 /** A depth–area table typed as CSV or uploaded from a file, checked row by row. */
 export default function StageTableEditor({ rows, onChange, system }: Props): ReactElement {
   const id = useId();
-  const [text, setText] = useState(() => stageCsvText(rows, system));
+  const locale = useInputLocale();
+  const [text, setText] = useState(() => stageCsvText(rows, system, locale));
   const [errors, setErrors] = useState<string[]>([]);
   const [loaded, setLoaded] = useState('');
   const emitted = useRef<StageRow[] | null>(null);
-  const shownIn = useRef(system);
+  const shownIn = useRef(`${system} ${locale}`);
   useEffect(() => {
     // a change of units or a table from a link rewrites the text; the crew's own typing does not
-    if (rows === emitted.current && shownIn.current === system) return;
-    shownIn.current = system;
+    if (rows === emitted.current && shownIn.current === `${system} ${locale}`) return;
+    shownIn.current = `${system} ${locale}`;
     setErrors([]);
-    setText(stageCsvText(rows, system));
-  }, [system, rows]);
+    setText(stageCsvText(rows, system, locale));
+  }, [system, rows, locale]);
   const apply = (t: string): void => {
     setText(t);
-    const r = parseStageCsv(t, system);
+    const r = parseStageCsv(t, system, locale);
     setErrors(r.errors);
     if (r.errors.length === 0) {
       const next = r.points as StageRow[];
@@ -64,8 +66,15 @@ export default function StageTableEditor({ rows, onChange, system }: Props): Rea
           onChange={async (e) => {
             const file = e.target.files?.[0];
             if (!file) return;
+            const t = await file.text();
+            const r = parseStageCsv(t, system, locale);
+            if (r.notText) {
+              // a file that is not text leaves the typed table as it was
+              setErrors([`“${file.name}”: ${r.errors[0]} The table above is unchanged.`]);
+              return;
+            }
             setLoaded(file.name);
-            apply(await file.text());
+            apply(t);
           }}
         />
       </label>

@@ -1,5 +1,6 @@
 import { memo } from 'react';
 import type { ReactElement } from 'react';
+import { WATER_TEMPERATURE_RANGE } from '../lib/calculators/field-input';
 import type { LineFieldsState } from '../lib/calculators/tool-state';
 import type { UnitSystem } from '../lib/hydraulics';
 import ChoiceButtons from './ChoiceButtons';
@@ -22,6 +23,7 @@ function WaterSiteFields({ s, update, system }: Props): ReactElement {
         system={system}
         value={s.temp_c}
         onChange={(v) => update({ temp_c: v })}
+        range={WATER_TEMPERATURE_RANGE}
         hint="0 to 99 °C (32 to 210 °F)"
       />
       <ChoiceButtons

@@ -3,7 +3,8 @@
  * its engine request. Heights of intakes and holes are typed above the vessel's bottom; the
  * outlet, crest and tailwater as elevations above the same datum as the bottom.
  */
-import type { DrainRequest, OutletInput, VesselInput } from '../hydraulics';
+import type { DrainRequest, OutletInput, UnitSystem, VesselInput } from '../hydraulics';
+import { formatQuantity } from '../hydraulics';
 import { entranceK } from './line-tool';
 import type { LineFieldsState } from './tool-state';
 import { LINE_FIELD_DEFAULTS, LINE_FIELD_US_START, fluidInput, lineInput, siteInput } from './tool-state';
@@ -61,10 +62,11 @@ export const DRAIN_TOOL_DEFAULTS: DrainToolState = {
   v_bottom_length_m: 6,
   v_bottom_width_m: 4,
   v_slope: 2,
+  // tops out at the starting water depth, so choosing this shape gives a result at once
   stage: [
     { depth_m: 0, area_m2: 20 },
-    { depth_m: 0.5, area_m2: 30 },
-    { depth_m: 1, area_m2: 42 },
+    { depth_m: 0.75, area_m2: 30 },
+    { depth_m: 1.5, area_m2: 42 },
   ],
   bottom_m: 0,
   initial_depth_m: 1.5,
@@ -97,8 +99,8 @@ export const DRAIN_TOOL_US_START: Partial<DrainToolState> = {
   v_bottom_width_m: ft(12),
   stage: [
     { depth_m: 0, area_m2: ft2(200) },
-    { depth_m: ft(1.5), area_m2: ft2(300) },
-    { depth_m: ft(3), area_m2: ft2(450) },
+    { depth_m: ft(2.5), area_m2: ft2(300) },
+    { depth_m: ft(5), area_m2: ft2(450) },
   ],
   initial_depth_m: ft(5),
   hole_diameter_m: inch(2),
@@ -138,6 +140,19 @@ export function vesselDepth(s: DrainToolState): number {
   if (s.shape === 'horizontal_cylinder' || s.shape === 'sphere') return s.v_diameter_m;
   if (s.shape === 'stage_table') return s.stage[s.stage.length - 1]?.depth_m ?? 0;
   return s.v_depth_m;
+}
+
+/**
+ * The starting depth's problem in words that name what bounds it (the table's top row for a
+ * depth–area table), in the crew's units; null when it fits. The engine's own message names
+ * API fields, so the tool checks this first.
+ */
+export function startDepthProblem(s: DrainToolState, system: UnitSystem): string | null {
+  const top = vesselDepth(s);
+  // a vessel with no depth of its own is the engine's to name
+  if (!(top > 0) || (s.initial_depth_m > 0 && s.initial_depth_m <= top * (1 + 1e-12))) return null;
+  const bound = s.shape === 'stage_table' ? 'the table’s top depth' : 'the vessel’s full depth';
+  return `Water depth now must be more than 0 and no more than ${bound}, ${formatQuantity('length', top, system)}.`;
 }
 
 export function outletOf(s: DrainToolState): OutletInput {

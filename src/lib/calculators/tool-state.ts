@@ -5,6 +5,7 @@
  */
 import type { FluidInput, LineInput, SiteInput } from '../hydraulics';
 import { findSize } from '../hydraulics';
+import { engineWaterTemperatureC } from './field-input';
 import { degF, ft, inch, psia } from './us-start';
 
 export interface FittingRow {
@@ -71,7 +72,7 @@ export function lineInput(s: LineFieldsState, entranceK: (id: string) => number)
 }
 
 export function fluidInput(s: LineFieldsState): FluidInput {
-  return { water_temperature_c: s.temp_c };
+  return { water_temperature_c: engineWaterTemperatureC(s.temp_c) };
 }
 
 export function siteInput(s: LineFieldsState): SiteInput {

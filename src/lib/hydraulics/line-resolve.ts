@@ -38,6 +38,9 @@ export interface LineState {
   regime: Regime;
 }
 
+/** Longest line API v1 accepts, m. */
+export const MAX_LINE_LENGTH_M = 100_000;
+
 const num = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
 export function field(v: unknown, path: string, ok: (x: number) => boolean, rule: string): number {
@@ -103,7 +106,7 @@ export function resolveLine(line: LineInput, path = 'line'): ResolvedLine {
   const l = field(
     line.length_m,
     `${path}.length_m`,
-    (x) => x >= 0 && x <= 100_000,
+    (x) => x >= 0 && x <= MAX_LINE_LENGTH_M,
     'between 0 and 100 000 m',
   );
   const eps = roughnessOf(line, d, path);
