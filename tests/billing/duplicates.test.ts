@@ -1,7 +1,7 @@
 import { count, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { billingCustomers, billingEvents, subscriptions } from '../../db/schema';
+import { billingCustomers, billingEvents, memberships, subscriptions } from '../../db/schema';
 import { FAKE_STRIPE_WEBHOOK_SECRET } from '../../fakes/stripe/spec';
 import type { Db } from '../../src/lib/db/client';
 import { startApp } from '../helpers/server';
@@ -218,5 +218,31 @@ describe('cancelling the plan (H2, M8)', () => {
     for (const s of live)
       await fetch(`${FAKE}/_fake/subscriptions/${s.id}/advance`, { method: 'POST' });
     expect(await liveAtFake()).toHaveLength(0);
+  });
+});
+
+describe('removing a team member (M8)', () => {
+  test('does ask first and remove only on the confirming submit', async () => {
+    const rosa = formAs(app.url, sessionFor(db, OWNER_ID));
+    const stillThere = (): boolean =>
+      db
+        .select()
+        .from(memberships)
+        .where(eq(memberships.userId, 'usr_demo_crew1'))
+        .all()
+        .some((m) => m.organisationId === ORG_ID);
+    const ask = await rosa('/app/team', { action: 'remove', target: 'usr_demo_crew1' });
+    expect(ask.status).toBe(200);
+    const html = await ask.text();
+    expect(html).toContain('data-testid="confirm-remove"');
+    expect(html).toContain('Remove Tomas Berg from Heronsgate');
+    expect(stillThere()).toBe(true);
+    const done = await rosa('/app/team', {
+      action: 'remove',
+      target: 'usr_demo_crew1',
+      confirm: 'yes',
+    });
+    expect(await done.text()).toContain('Member removed.');
+    expect(stillThere()).toBe(false);
   });
 });
