@@ -52,6 +52,8 @@ export const subscriptions = sqliteTable(
     pastDueSince: integer('past_due_since', { mode: 'timestamp_ms' }),
     /** When the stored state was read from the service; an older read never overwrites it. */
     syncedAt: integer('synced_at', { mode: 'timestamp_ms' }).notNull(),
+    /** Set when we cancelled it as a second live subscription of one organisation: the one kept. */
+    duplicateOf: text('duplicate_of'),
   },
   (t) => [index('subscriptions_org_idx').on(t.organisationId, t.startedAt)],
 );

@@ -4,7 +4,15 @@ import type { Db } from '../../src/lib/db/client';
 import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startApp } from '../helpers/server';
 import type { StartedApp } from '../helpers/server';
-import { OWNER_ID, SESSION_COOKIE, appDb, deliveriesSettled, sessionFor } from './helpers';
+import {
+  ORG_ID,
+  OWNER_ID,
+  SESSION_COOKIE,
+  appDb,
+  deliveriesSettled,
+  sessionFor,
+  withdrawGrant,
+} from './helpers';
 
 // Ports from the billing range 16400–16499.
 const APP_PORT = 16421;
@@ -26,6 +34,7 @@ beforeAll(async () => {
     launchBrowser(),
   ]);
   db = appDb(app.dataDir);
+  withdrawGrant(db, ORG_ID);
 }, 120_000);
 
 afterAll(async () => {

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { beforeEach, describe, expect, test } from 'vitest';
 import { memberships, organisations, subscriptions, users } from '../../db/schema';
-import { entitlementFor, planRefusal } from '../../src/lib/billing/entitlements';
+import { checkoutRefusal, entitlementFor, planRefusal } from '../../src/lib/billing/entitlements';
 import { applySubscription, staleReason } from '../../src/lib/billing/sync';
 import type { SubscriptionRow } from '../../src/lib/billing/sync';
 import type { Db } from '../../src/lib/db/client';
@@ -30,6 +30,7 @@ function row(overrides: Partial<SubscriptionRow> = {}): SubscriptionRow {
     startedAt: T0,
     pastDueSince: null,
     syncedAt: T0,
+    duplicateOf: null,
     ...overrides,
   };
 }
@@ -93,6 +94,29 @@ describe('entitlementFor', () => {
       status: 'granted',
       seatsPaid: 5,
     });
+  });
+});
+
+describe('checkoutRefusal', () => {
+  test('does refuse a checkout to a granted organisation and say what the grant is', () => {
+    db.update(organisations).set({ plan: 'pro' }).run();
+    const refusal = checkoutRefusal(entitlementFor(db, 'org_a'));
+    expect(refusal?.code).toBe('granted_plan');
+    expect(refusal?.message).toMatch(/granted.*5 seats.*no charge/);
+  });
+
+  test('does refuse while a subscription is live and allow it once the plan has ended', () => {
+    for (const status of ['trialing', 'active', 'past_due'] as const) {
+      db.delete(subscriptions).run();
+      apply(row({ status }));
+      expect(checkoutRefusal(entitlementFor(db, 'org_a'))?.code).toBe('already_subscribed');
+    }
+    apply(row({ status: 'canceled', endedAt: T0, syncedAt: new Date(T0.getTime() + 1) }));
+    expect(checkoutRefusal(entitlementFor(db, 'org_a'))).toBeNull();
+  });
+
+  test('does allow a free organisation to start', () => {
+    expect(checkoutRefusal(entitlementFor(db, 'org_a'))).toBeNull();
   });
 });
 

@@ -1,7 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import Stripe from 'stripe';
-import { sessions } from '../../db/schema';
+import { eq } from 'drizzle-orm';
+import { organisations, sessions } from '../../db/schema';
 import { openDatabase } from '../../src/lib/db/client';
 import type { Db } from '../../src/lib/db/client';
 
@@ -13,6 +14,14 @@ export const SESSION_COOKIE = 'authjs.session-token';
 /** The app's own database file under its DATA_DIR. */
 export function appDb(dataDir: string): Db {
   return openDatabase(path.join(dataDir, 'drainwright.sqlite'));
+}
+
+/**
+ * The seeded firm's plan is granted (no subscription), and a granted plan cannot be bought on top;
+ * tests that buy the plan as its owner first take the grant back.
+ */
+export function withdrawGrant(db: Db, organisationId: string): void {
+  db.update(organisations).set({ plan: 'free' }).where(eq(organisations.id, organisationId)).run();
 }
 
 /**
@@ -38,6 +47,21 @@ export function asUser(base: string, token: string) {
         ...(init.json ? { 'content-type': 'application/json' } : {}),
       },
       body: init.json ? JSON.stringify(init.json) : undefined,
+      redirect: 'manual',
+    });
+}
+
+/** A plain HTML form post as a signed-in browser sends it (no script). */
+export function formAs(base: string, token: string) {
+  return (pathname: string, fields: Record<string, string>): Promise<Response> =>
+    fetch(`${base}${pathname}`, {
+      method: 'POST',
+      headers: {
+        cookie: `${SESSION_COOKIE}=${token}`,
+        origin: base,
+        'content-type': 'application/x-www-form-urlencoded',
+      },
+      body: new URLSearchParams(fields),
       redirect: 'manual',
     });
 }

@@ -15,6 +15,7 @@ import {
   payWith,
   sdkFor,
   sessionFor,
+  withdrawGrant,
 } from './helpers';
 
 // Ports from the billing range 16400–16499.
@@ -50,6 +51,7 @@ beforeAll(async () => {
     STRIPE_WEBHOOK_SECRET: '',
   });
   db = appDb(app.dataDir);
+  withdrawGrant(db, ORG_ID);
   call = asUser(app.url, sessionFor(db, OWNER_ID));
   stripe = sdkFor(FAKE_PORT);
 }, 120_000);

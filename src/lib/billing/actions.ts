@@ -1,10 +1,13 @@
 import { eq } from 'drizzle-orm';
+import type Stripe from 'stripe';
 import { billingCustomers } from '../../../db/schema';
 import type { Db } from '../db/client';
 import { seatsInUse } from '../data/invitations';
 import type { BillingInterval } from './plans';
 import { MAX_SEATS, TRIAL_DAYS } from './plans';
 import { proPriceIds } from './prices';
+import { checkoutRefusal, entitlementFor } from './entitlements';
+import { cancelDuplicates, liveAtProvider, storeSubscription } from './live-subscriptions';
 import { currentSubscription } from './seat-floor';
 import { getStripe } from './stripe-client';
 import { PAYING, applySubscription, rowFrom } from './sync';
@@ -68,23 +71,23 @@ function checkSeats(organisationId: string, seats: number): void {
   }
 }
 
-/** Start a checkout for the Crew plan; returns the hosted page's URL. The trial is for first-timers. */
+/**
+ * Start a checkout for the Crew plan; returns the hosted page's URL. The trial is for first-timers.
+ * Refused while the organisation holds the plan, by grant or by a live subscription here or at the
+ * payments service (whose events may not have reached us yet).
+ */
 export async function startCheckout(
   db: Db,
   args: { org: Org; email: string; interval: BillingInterval; seats: number; origin: string },
 ): Promise<string> {
+  const refusal = checkoutRefusal(entitlementFor(db, args.org.id));
+  if (refusal) throw new BillingError(409, refusal.code, refusal.message);
   const current = currentSubscription(db, args.org.id);
-  if (current && PAYING.includes(current.status)) {
-    throw new BillingError(
-      409,
-      'already_subscribed',
-      'This organisation already has a Crew plan; change seats instead.',
-    );
-  }
   checkSeats(args.org.id, args.seats);
   const stripe = getStripe();
   const prices = await proPriceIds(stripe);
   const customer = await customerFor(db, args.org, args.email);
+  await refuseIfLiveAtProvider(db, stripe, args.org.id, customer);
   const firstTime = !current;
   const session = await stripe.checkout.sessions.create({
     mode: 'subscription',
@@ -107,6 +110,20 @@ export async function startCheckout(
   return session.url;
 }
 
+async function refuseIfLiveAtProvider(
+  db: Db,
+  stripe: Stripe,
+  organisationId: string,
+  customerId: string,
+): Promise<void> {
+  const askedAt = new Date();
+  const live = await liveAtProvider(stripe, customerId);
+  if (live.length === 0) return;
+  for (const sub of live) storeSubscription(db, organisationId, sub, askedAt);
+  const refusal = checkoutRefusal(entitlementFor(db, organisationId));
+  throw new BillingError(409, refusal?.code ?? 'already_subscribed', refusal?.message ?? '');
+}
+
 /** After the hosted checkout returns: read the new subscription now rather than wait for the event. */
 export async function syncCheckout(
   db: Db,
@@ -117,7 +134,10 @@ export async function syncCheckout(
   const session = await stripe.checkout.sessions.retrieve(sessionId);
   if (session.client_reference_id !== organisationId || typeof session.subscription !== 'string')
     return;
-  await syncSubscription(db, organisationId, session.subscription);
+  const row = await syncSubscription(db, organisationId, session.subscription);
+  // The webhook does the same; whichever comes first stops a second live subscription.
+  if (PAYING.includes(row.status))
+    await cancelDuplicates(db, stripe, organisationId, row.customerId);
 }
 
 async function syncSubscription(
@@ -155,15 +175,26 @@ export async function changeSeats(
   return syncSubscription(db, organisationId, sub.id);
 }
 
-/** Cancel at the end of the period (default) or now. Data stays; the organisation turns read-only. */
+/**
+ * Cancel at the end of the period (default) or now. Data stays; the organisation turns read-only.
+ * Acts on every live subscription the payments service holds for the customer, not only the one
+ * we show, so nothing keeps renewing after the owner is told the plan ends.
+ */
 export async function cancelPlan(
   db: Db,
   organisationId: string,
   when: 'period_end' | 'now',
 ): Promise<SubscriptionRow> {
   const sub = liveSubscription(db, organisationId);
-  if (when === 'now') await getStripe().subscriptions.cancel(sub.id);
-  else await getStripe().subscriptions.update(sub.id, { cancel_at_period_end: true });
+  const stripe = getStripe();
+  for (const live of await liveAtProvider(stripe, sub.customerId)) {
+    const askedAt = new Date();
+    const changed =
+      when === 'now'
+        ? await stripe.subscriptions.cancel(live.id)
+        : await stripe.subscriptions.update(live.id, { cancel_at_period_end: true });
+    storeSubscription(db, organisationId, changed, askedAt);
+  }
   return syncSubscription(db, organisationId, sub.id);
 }
 

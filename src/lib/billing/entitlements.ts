@@ -151,3 +151,19 @@ export function requirePro(
     return Response.json({ error: 'plan_required', message: 'No organisation.' }, { status: 403 });
   return planRefusal(entitlementFor(db, locals.organisation.id), need);
 }
+
+/** What a granted plan is, in the owner's words: shown instead of a purchase form. */
+export const GRANTED_TEXT = `Your ${PLAN_NAMES.pro} plan is granted: full use for ${GRANTED_SEATS} seats at no charge, with nothing to pay or renew. A paid plan is not needed and cannot be added on top of it; for more seats, ask the people who granted it.`;
+
+/** Why the organisation may not start a checkout now (it already holds the plan), or null. */
+export function checkoutRefusal(
+  entitlement: Entitlement,
+): { code: 'granted_plan' | 'already_subscribed'; message: string } | null {
+  if (entitlement.status === 'granted') return { code: 'granted_plan', message: GRANTED_TEXT };
+  if (['trialing', 'active', 'past_due'].includes(entitlement.status))
+    return {
+      code: 'already_subscribed',
+      message: `This organisation already has a ${PLAN_NAMES.pro} plan; change seats instead.`,
+    };
+  return null;
+}

@@ -9,6 +9,8 @@ type Tx = Pick<Db, 'select' | 'insert' | 'update'>;
 export type SubscriptionRow = typeof subscriptions.$inferSelect;
 
 const ms = (unix: number | null | undefined): Date | null => (unix ? new Date(unix * 1000) : null);
+/** Subscription metadata key naming the subscription a cancelled duplicate gave way to. */
+export const DUPLICATE_OF_KEY = 'duplicate_of';
 /** States in which the organisation is on the paid plan (past due still is, for its grace). */
 export const PAYING: readonly SubscriptionStatus[] = ['trialing', 'active', 'past_due'];
 
@@ -42,6 +44,7 @@ export function rowFrom(
     startedAt: ms(sub.start_date ?? sub.created)!,
     pastDueSince: sub.status === 'past_due' ? syncedAt : null,
     syncedAt,
+    duplicateOf: sub.metadata?.[DUPLICATE_OF_KEY] ?? null,
   };
 }
 

@@ -3,7 +3,11 @@ import type Stripe from 'stripe';
 import { billingEvents } from '../../../db/schema';
 import type { Db } from '../db/client';
 import { keepSeatsAboveMembers } from './seat-floor';
-import { applySubscription, organisationForCustomer, rowFrom } from './sync';
+import { cancelDuplicates } from './live-subscriptions';
+import { PAYING, applySubscription, organisationForCustomer, rowFrom } from './sync';
+
+const customerOf = (sub: Stripe.Subscription): string =>
+  typeof sub.customer === 'string' ? sub.customer : sub.customer.id;
 
 export type EventOutcome = 'applied' | 'stale' | 'duplicate' | 'ignored';
 
@@ -31,7 +35,8 @@ function organisationHint(event: Stripe.Event, sub: Stripe.Subscription | null):
 /**
  * Apply one verified event. The subscription is read afresh from the service (the event's copy
  * may be older than what we hold), and stored only if it is newer than our row; the event id is
- * recorded in the same transaction, so a repeat is recognised and changes nothing.
+ * recorded in the same transaction, so a repeat is recognised and changes nothing. A live
+ * subscription that makes a second one for its organisation is cancelled (see live-subscriptions).
  */
 export async function processEvent(
   db: Db,
@@ -58,13 +63,15 @@ export async function processEvent(
       .run();
     if (inserted.changes === 0) return 'duplicate';
     if (!sub) return 'ignored';
-    const customerId = typeof sub.customer === 'string' ? sub.customer : sub.customer.id;
-    organisationId = organisationForCustomer(tx, customerId, organisationHint(event, sub));
+    organisationId = organisationForCustomer(tx, customerOf(sub), organisationHint(event, sub));
     if (!organisationId) return 'ignored';
     return applySubscription(tx, rowFrom(sub, organisationId, askedAt));
   });
-  if (outcome === 'applied' && organisationId)
+  if (outcome === 'applied' && organisationId && sub) {
+    if ((PAYING as readonly string[]).includes(sub.status))
+      await cancelDuplicates(db, stripe, organisationId, customerOf(sub));
     await keepSeatsAboveMembers(db, stripe, organisationId);
+  }
   return outcome;
 }
 
