@@ -1,3 +1,14 @@
+/** A refused call: the server's words as the message, plus its status and body (e.g. a 409's newer job). */
+export class ApiError extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly body: Record<string, unknown>,
+  ) {
+    super(message);
+  }
+}
+
 /** Browser-side calls to the jobs API; every failure becomes an Error with the server's words. */
 export async function api<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
   const r = await fetch(url, {
@@ -9,7 +20,7 @@ export async function api<T>(url: string, init?: { method?: string; body?: unkno
   const body = await r.json().catch(() => ({}));
   if (!r.ok) {
     const issues = (body.issues as { path: string; message: string }[] | undefined)?.map((i) => `${i.path} ${i.message}`).join('; ');
-    throw new Error(issues || body.message || `Request failed (${r.status}).`);
+    throw new ApiError(issues || body.message || `Request failed (${r.status}).`, r.status, body);
   }
   return body as T;
 }
