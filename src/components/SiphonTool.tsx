@@ -5,6 +5,7 @@ import { siphonHints } from '../lib/calculators/hints';
 import { biggestLoss, crestMarginM } from '../lib/calculators/limits';
 import type { SiphonToolState } from '../lib/calculators/line-tool';
 import { SIPHON_TOOL_DEFAULTS, SIPHON_TOOL_US_START, siphonToolRequest } from '../lib/calculators/line-tool';
+import { siphonFigures } from '../lib/calculators/result-figures';
 import { siphonProfile } from '../lib/calculators/siphon-profile';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { siphonVerdict } from '../lib/calculators/verdict';
@@ -21,7 +22,7 @@ import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
 import LineFields from './LineFields';
-import { FlowFacts, LossPanel, lineFigures } from './LineResultParts';
+import { FlowFacts, LossPanel } from './LineResultParts';
 import LineSchematic from './LineSchematic';
 import NumberField from './NumberField';
 import PressureTable from './PressureTable';
@@ -101,30 +102,7 @@ export default function SiphonTool(): ReactElement {
   if ('error' in out)
     return <ToolLayout inputs={inputs} result={<InputProblem text={out.error!} />} />;
   const { r } = out;
-  const figures = [
-    ...lineFigures(r),
-    {
-      id: 'crest-pressure',
-      label: 'Pressure at the crest',
-      kind: 'pressure' as const,
-      si: r.crest_pressure_abs_pa,
-    },
-    {
-      id: 'crest-limit',
-      label: 'Working limit at the crest',
-      kind: 'pressure' as const,
-      si: r.crest_limit_pa,
-    },
-    { id: 'vapour', label: 'Vapour pressure', kind: 'pressure' as const, si: r.vapor_pressure_pa },
-    {
-      id: 'max-crest',
-      label: 'Highest crest above the water',
-      kind: 'length' as const,
-      si: r.max_crest_height_m,
-      note: 'where crest pressure meets vapour pressure',
-    },
-    { id: 'priming', label: 'Water to prime', kind: 'volume' as const, si: r.priming_volume_m3 },
-  ];
+  const figures = siphonFigures(r);
   const result = (
     <>
       <VerdictBanner verdict={siphonVerdict(r)} />
