@@ -19,6 +19,8 @@ export const jobs = sqliteTable(
     siteAddress: text('site_address').notNull().default(''),
     notes: text('notes').notNull().default(''),
     status: text('status', { enum: JOB_STATUSES }).notNull().default('scoping'),
+    /** Bumped by every edit of the fields above; a save names the revision it was loaded at. */
+    revision: integer('revision').notNull().default(1),
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),

@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import type { ReactElement } from 'react';
-import { api } from '../lib/jobs/client-api';
+import { checkOnWhite, isHexColour } from '../lib/brand/contrast';
+import { api, ApiError } from '../lib/jobs/client-api';
 
 interface Brand { companyName: string; primaryColour: string; accentColour: string; licenceNumber: string; contactBlock: string; reportFooter: string; logoFile: string | null }
 interface Verdict { ratio: number; textOnPaper: 'aa' | 'large_only' | 'fails' }
@@ -8,11 +9,18 @@ interface Answer { brand: Brand; contrast: { primary: Verdict; accent: Verdict }
 const WORDS = { aa: 'readable as text on white (WCAG AA)', large_only: 'large text only on white', fails: 'too faint on white' } as const;
 const field = 'min-h-11 rounded-md border border-rule bg-white px-3';
 
+function fieldErrors(e: Error): Record<string, string> {
+  const issues = e instanceof ApiError ? (e.body.issues as { path: string; message: string }[] | undefined) : undefined;
+  return Object.fromEntries((issues ?? []).map((i) => [i.path, i.message]));
+}
+
 /** The owner's brand kit: name, logo, two colours with a contrast check, licence, contact, footer. */
 export default function BrandKitForm(): ReactElement {
   const [a, setA] = useState<Answer | null>(null);
   const [msg, setMsg] = useState('');
   const [logoKey, setLogoKey] = useState(0);
+  // The server's refusals by field, shown under the field they concern.
+  const [errors, setErrors] = useState<Record<string, string>>({});
   useEffect(() => void api<Answer>('/api/brand').then(setA).catch((e: Error) => setMsg(e.message)), []);
   if (!a) return <p role="status">{msg || 'Loading…'}</p>;
   const b = a.brand;
@@ -20,7 +28,8 @@ export default function BrandKitForm(): ReactElement {
   const save = (): void => {
     const { companyName, primaryColour, accentColour, licenceNumber, contactBlock, reportFooter } = b;
     api<Answer>('/api/brand', { method: 'PUT', body: { companyName, primaryColour, accentColour, licenceNumber, contactBlock, reportFooter } })
-      .then((r) => { setA(r); setMsg('Brand kit saved.'); }).catch((e: Error) => setMsg(e.message));
+      .then((r) => { setA(r); setErrors({}); setMsg('Brand kit saved.'); })
+      .catch((e: Error) => { setErrors(fieldErrors(e)); setMsg(e instanceof ApiError && e.status === 400 ? 'Not saved: see the field marked below.' : e.message); });
   };
   const upload = async (file: File): Promise<void> => {
     const form = new FormData();
@@ -30,12 +39,17 @@ export default function BrandKitForm(): ReactElement {
     setMsg(r.ok ? 'Logo saved.' : body.message ?? 'Upload failed.');
     if (r.ok) setLogoKey(Date.now());
   };
-  const colour = (k: 'primaryColour' | 'accentColour', label: string, v: Verdict): ReactElement => (
-    <label className="grid gap-1">{label}
-      <span className="flex items-center gap-2"><input type="color" value={b[k]} onChange={set(k)} className="h-11 w-14" /><input className={field} value={b[k]} onChange={set(k)} /></span>
-      <span className="text-step--1">Contrast {v.ratio.toFixed(2)}:1 — {WORDS[v.textOnPaper]}</span>
-    </label>
-  );
+  // The same check the server refuses a save by, live as the owner types.
+  const colour = (k: 'primaryColour' | 'accentColour', label: string, saved: Verdict): ReactElement => {
+    const v = isHexColour(b[k]) ? checkOnWhite(b[k]) : saved;
+    return (
+      <label className="grid gap-1">{label}
+        <span className="flex items-center gap-2"><input type="color" value={b[k]} onChange={set(k)} className="h-11 w-14" /><input className={field} value={b[k]} onChange={set(k)} /></span>
+        <span className="text-step--1">Contrast {v.ratio.toFixed(2)}:1 — {WORDS[v.textOnPaper]}</span>
+        {errors[k] && <span className="font-semibold text-verdict-fails" data-testid={`error-${k}`}>{label.replace(/ \(.*/, '')} {errors[k]}</span>}
+      </label>
+    );
+  };
   return (
     <form className="grid gap-3" onSubmit={(e) => { e.preventDefault(); save(); }}>
       <label className="grid gap-1">Company name<input className={field} value={b.companyName} onChange={set('companyName')} required /></label>

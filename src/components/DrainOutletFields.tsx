@@ -1,6 +1,7 @@
 import { memo } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState } from '../lib/calculators/drain-tool';
+import { OUTLET_TYPES } from '../lib/calculators/input-words';
 import type { UnitSystem } from '../lib/hydraulics';
 import ChoiceButtons from './ChoiceButtons';
 import LineFields from './LineFields';
@@ -39,11 +40,7 @@ function DrainOutletFields({ s, update, system }: Props): ReactElement {
         legend="Drains through"
         name="outlet"
         value={s.outlet}
-        choices={[
-          { value: 'orifice', label: 'Holes or open valves' },
-          { value: 'line', label: 'A gravity line' },
-          { value: 'siphon', label: 'A siphon over the rim' },
-        ]}
+        choices={OUTLET_TYPES}
         onChange={(v) => update({ outlet: v as DrainToolState['outlet'] })}
       />
       {s.outlet === 'orifice' ? (

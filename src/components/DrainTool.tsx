@@ -9,10 +9,10 @@ import {
   startDepthProblem,
 } from '../lib/calculators/drain-tool';
 import { inputErrorText } from '../lib/calculators/field-names';
-import type { Figure } from '../lib/calculators/quick-result';
+import { drainFigures, STOP_WORDS } from '../lib/calculators/result-figures';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { drainVerdict } from '../lib/calculators/verdict';
-import type { DrainResult, UnitSystem } from '../lib/hydraulics';
+import type { UnitSystem } from '../lib/hydraulics';
 import { solveDrain } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
@@ -35,13 +35,6 @@ import WaterSiteFields from './WaterSiteFields';
 
 const DrawdownChart = lazy(() => import('./DrawdownChart'));
 
-const STOP_WORDS: Record<DrainResult['stop_reason'], string> = {
-  final_depth: 'it reaches the target depth',
-  intake_uncovered: 'the level reaches the intake or hole',
-  no_head: 'the head runs out (the level meets the outlet or tailwater)',
-  siphon_breaks: 'the siphon’s crest pressure reaches its limit',
-};
-
 function compute(s: DrainToolState, system: UnitSystem): SolvedDrain | { error: string } {
   const depthProblem = startDepthProblem(s, system);
   if (depthProblem) return { error: depthProblem };
@@ -51,22 +44,6 @@ function compute(s: DrainToolState, system: UnitSystem): SolvedDrain | { error: 
   } catch (e) {
     return { error: inputErrorText(e) };
   }
-}
-
-function figures(r: DrainResult): Figure[] {
-  return [
-    {
-      id: 'time',
-      label: 'Time to the stop',
-      kind: 'time',
-      si: r.status === 'no_flow' ? Infinity : r.time_s,
-    },
-    { id: 'flow', label: 'Flow at the start', kind: 'flow', si: r.initial_flow_m3_s },
-    { id: 'mean-flow', label: 'Average flow', kind: 'flow', si: r.mean_flow_m3_s },
-    { id: 'volume', label: 'Water at the start', kind: 'volume', si: r.volume_initial_m3 },
-    { id: 'drained', label: 'Water moved', kind: 'volume', si: r.volume_drained_m3 },
-    { id: 'stop-depth', label: 'Depth at the stop', kind: 'length', si: r.stop_depth_m },
-  ];
 }
 
 /** The full drain-down tool: every vessel shape, every outlet, the drawdown curve, what would help. */
@@ -116,7 +93,7 @@ export default function DrainTool(): ReactElement {
     ) : (
       <>
         <VerdictBanner verdict={drainVerdict(out.r)} />
-        <FigureList figures={figures(out.r)} system={figuresIn} />
+        <FigureList figures={drainFigures(out.r)} system={figuresIn} />
         <p data-testid="limits">It stops when {STOP_WORDS[out.r.stop_reason]}.</p>
         <WarningList warnings={out.r.warnings} />
         <CautionNotes ids={cautions} />

@@ -1,12 +1,14 @@
 import { useCallback, useEffect, useState } from 'react';
 import type { ReactElement } from 'react';
-import { api } from '../lib/jobs/client-api';
+import { api, ApiError } from '../lib/jobs/client-api';
+import JobConflict from './JobConflict';
+import type { JobFieldsView } from './JobConflict';
 import JobCalculations from './JobCalculations';
 import type { Calc } from './JobCalculations';
 import JobReportActions from './JobReportActions';
 import type { Share } from './JobReportActions';
 
-interface Job { id: string; title: string; client: string; siteAddress: string; notes: string; status: string }
+interface Job extends JobFieldsView { id: string }
 interface Detail { job: Job; calculations: Calc[]; shares: Share[]; canWrite: boolean }
 const STATUSES = [['scoping', 'Scoping'], ['quoted', 'Quoted'], ['on_site', 'On site'], ['wrapped_up', 'Wrapped up']] as const;
 const field = 'min-h-11 rounded-md border border-rule bg-white px-3';
@@ -16,15 +18,20 @@ export default function JobDetail({ jobId }: { jobId: string }): ReactElement {
   const [d, setD] = useState<Detail | null>(null);
   const [form, setForm] = useState<Job | null>(null);
   const [msg, setMsg] = useState('');
+  // The newer job a save lost to; the form keeps the user's text until they choose.
+  const [theirs, setTheirs] = useState<Job | null>(null);
   const load = useCallback(() => {
-    api<Detail>(`/api/jobs/${jobId}`).then((r) => { setD(r); setForm(r.job); }).catch((e: Error) => setMsg(e.message));
+    api<Detail>(`/api/jobs/${jobId}`).then((r) => { setD(r); setForm(r.job); setTheirs(null); }).catch((e: Error) => setMsg(e.message));
   }, [jobId]);
   useEffect(load, [load]);
   if (!d || !form) return <p role="status">{msg || 'Loading…'}</p>;
   const set = (k: keyof Job) => (e: { target: { value: string } }): void => setForm({ ...form, [k]: e.target.value });
-  const save = (): void => {
+  const save = (revision = form.revision): void => {
     const { title, client, siteAddress, notes, status } = form;
-    api(`/api/jobs/${jobId}`, { method: 'PATCH', body: { title, client, siteAddress, notes, status } }).then(() => { setMsg('Saved.'); load(); }).catch((e: Error) => setMsg(e.message));
+    setMsg('');
+    api(`/api/jobs/${jobId}`, { method: 'PATCH', body: { title, client, siteAddress, notes, status, revision } })
+      .then(() => { setMsg('Saved.'); load(); })
+      .catch((e: Error) => (e instanceof ApiError && e.status === 409 ? setTheirs(e.body.job as Job) : setMsg(e.message)));
   };
   const remove = (): void => {
     if (confirm('Delete this job and all its calculations?')) api(`/api/jobs/${jobId}`, { method: 'DELETE' }).then(() => location.assign('/app/jobs')).catch((e: Error) => setMsg(e.message));
@@ -43,6 +50,7 @@ export default function JobDetail({ jobId }: { jobId: string }): ReactElement {
         {d.canWrite ? (
           <div className="flex flex-wrap gap-2"><button className={field}>Save changes</button><button type="button" className={field} onClick={remove}>Delete job</button></div>
         ) : <p>This account is read-only: you can read, print and export, not change.</p>}
+        {theirs && <JobConflict mine={form} theirs={theirs} onReload={load} onOverwrite={() => save(theirs.revision)} />}
         {msg && <p role="status">{msg}</p>}
       </form>
       <section className="grid gap-3"><h2 className="text-step-1 font-bold">Calculations</h2><JobCalculations calcs={d.calculations} canWrite={d.canWrite} onChanged={load} /></section>

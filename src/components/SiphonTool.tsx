@@ -5,6 +5,7 @@ import { siphonHints } from '../lib/calculators/hints';
 import { biggestLoss, crestMarginM } from '../lib/calculators/limits';
 import type { SiphonToolState } from '../lib/calculators/line-tool';
 import { SIPHON_TOOL_DEFAULTS, SIPHON_TOOL_US_START, siphonToolRequest } from '../lib/calculators/line-tool';
+import { siphonFigures } from '../lib/calculators/result-figures';
 import { siphonProfile } from '../lib/calculators/siphon-profile';
 import { FITTING_ROW } from '../lib/calculators/tool-state';
 import { siphonVerdict } from '../lib/calculators/verdict';
@@ -17,13 +18,11 @@ import {
 } from '../lib/hydraulics';
 import { useStagedTool } from '../lib/stores/use-staged-units';
 import CautionNotes from './CautionNotes';
-import { cautionIdsFor } from '../lib/cautions';
-import { crestPressureFigure, leadWithCrestWhenBroken, siphonFlowFigure } from '../lib/calculators/siphon-figures';
 import ChartPanel from './ChartPanel';
 import FigureList from './FigureList';
 import LevelFields from './LevelFields';
 import LineFields from './LineFields';
-import { FlowFacts, LossPanel, lineFigures } from './LineResultParts';
+import { FlowFacts, LossPanel } from './LineResultParts';
 import LineSchematic from './LineSchematic';
 import NumberField from './NumberField';
 import PressureTable from './PressureTable';
@@ -103,25 +102,7 @@ export default function SiphonTool(): ReactElement {
   if ('error' in out)
     return <ToolLayout inputs={inputs} result={<InputProblem text={out.error!} />} />;
   const { r } = out;
-  const figures = leadWithCrestWhenBroken(r, [
-    ...lineFigures(r).map((f) => (f.id === 'flow' ? siphonFlowFigure(r) : f)),
-    crestPressureFigure(r),
-    {
-      id: 'crest-limit',
-      label: 'Working limit at the crest',
-      kind: 'pressure' as const,
-      si: r.crest_limit_pa,
-    },
-    { id: 'vapour', label: 'Vapour pressure', kind: 'pressure' as const, si: r.vapor_pressure_pa },
-    {
-      id: 'max-crest',
-      label: 'Highest crest above the water',
-      kind: 'length' as const,
-      si: r.max_crest_height_m,
-      note: 'where crest pressure meets vapour pressure',
-    },
-    { id: 'priming', label: 'Water to prime', kind: 'volume' as const, si: r.priming_volume_m3 },
-  ]);
+  const figures = siphonFigures(r);
   const result = (
     <>
       <VerdictBanner verdict={siphonVerdict(r)} />
@@ -150,7 +131,7 @@ export default function SiphonTool(): ReactElement {
         )}
       </ul>
       <WarningList warnings={r.warnings} />
-      <CautionNotes ids={cautionIdsFor({ tool: 'siphon' })} />
+      <CautionNotes ids={['no-mouth-priming', 'intake-entrapment', 'discharge', 'estimates']} />
       <ResultActions
         tool="siphon"
         inputs={out.req}

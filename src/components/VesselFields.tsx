@@ -1,6 +1,7 @@
 import { memo, Suspense, lazy } from 'react';
 import type { ReactElement } from 'react';
 import type { DrainToolState, VesselShape } from '../lib/calculators/drain-tool';
+import { SHAPES } from '../lib/calculators/input-words';
 import type { UnitSystem } from '../lib/hydraulics';
 import NumberField from './NumberField';
 import SelectField from './SelectField';
@@ -13,16 +14,6 @@ interface Props {
   update: (p: Partial<DrainToolState>) => void;
   system: UnitSystem;
 }
-
-export const SHAPES: { value: VesselShape; label: string }[] = [
-  { value: 'box', label: 'Box: square or oblong, straight sides' },
-  { value: 'vertical_cylinder', label: 'Round tank, upright' },
-  { value: 'horizontal_cylinder', label: 'Round tank lying down (flat ends)' },
-  { value: 'sphere', label: 'Sphere' },
-  { value: 'cone_bottom', label: 'Round tank with a cone bottom' },
-  { value: 'sloped_pond', label: 'Pond or basin with sloped sides' },
-  { value: 'stage_table', label: 'Any shape: depth–area table' },
-];
 
 type Key = keyof DrainToolState & string;
 

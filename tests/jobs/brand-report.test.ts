@@ -1,6 +1,7 @@
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { lineVerdict } from '../../src/lib/calculators/verdict';
 import { startJobsApp } from './app-fixture';
 import type { JobsApp } from './app-fixture';
 
@@ -61,14 +62,34 @@ describe('logo upload', () => {
 describe('brand kit', () => {
   test('does save colours with a WCAG contrast verdict and refuse a bad colour', async () => {
     const headers = { ...t.as(OWNER), 'content-type': 'application/json' };
-    const body = { companyName: 'Heronsgate Test Brand', primaryColour: '#000000', accentColour: '#ffffff', licenceNumber: 'LIC-4471', contactBlock: 'Call us', reportFooter: 'Thanks' };
+    const body = { companyName: 'Heronsgate Test Brand', primaryColour: '#000000', accentColour: '#767676', licenceNumber: 'LIC-4471', contactBlock: 'Call us', reportFooter: 'Thanks' };
     const ok = await (await fetch(`${t.app.url}/api/brand`, { method: 'PUT', headers, body: JSON.stringify(body) })).json();
-    // Black on white is 21:1 and white on white 1:1 (WCAG 2.1 contrast ratio definition).
+    // Black on white is 21:1 (WCAG 2.1 contrast ratio definition); #767676 on white 4.54:1, the
+    // lightest grey passing AA for text (common practice, from memory).
     expect(ok.contrast.primary.ratio).toBeCloseTo(21, 6);
-    expect(ok.contrast.accent.textOnPaper).toBe('fails');
+    expect(ok.contrast.accent.ratio).toBeCloseTo(4.54, 2);
+    expect(ok.contrast.accent.textOnPaper).toBe('aa');
     const bad = await fetch(`${t.app.url}/api/brand`, { method: 'PUT', headers, body: JSON.stringify({ ...body, primaryColour: 'red' }) });
     expect(bad.status).toBe(400);
     await fetch(`${t.app.url}/api/brand`, { method: 'PUT', headers, body: JSON.stringify({ ...body, accentColour: '#1b7f86' }) });
+  });
+
+  test('does refuse a colour under 3:1 on white with an error on that field, and keep the saved kit (QA s23 M5)', async () => {
+    const headers = { ...t.as(OWNER), 'content-type': 'application/json' };
+    const body = { companyName: 'Heronsgate Test Brand', primaryColour: '#000000', accentColour: '#1b7f86', licenceNumber: '', contactBlock: '', reportFooter: '' };
+    // #ffee00 on white: L = 0.2126 + 0.7152 * 0.855 = 0.824, (1.05) / (0.874) = 1.20:1 by the
+    // WCAG 2.1 formula worked by hand (and as QA saw); #ffffff is 1:1. Both under SC 1.4.3's 3:1.
+    expect((await fetch(`${t.app.url}/api/brand`, { method: 'PUT', headers, body: JSON.stringify(body) })).status).toBe(200);
+    for (const [field, value, ratio] of [['primaryColour', '#ffee00', '1.20'], ['accentColour', '#ffffff', '1.00']] as const) {
+      const r = await fetch(`${t.app.url}/api/brand`, { method: 'PUT', headers, body: JSON.stringify({ ...body, [field]: value }) });
+      expect(r.status, field).toBe(400);
+      const issue = (await r.json()).issues[0];
+      expect(issue.path).toBe(field);
+      expect(issue.message).toContain(`${ratio}:1`);
+      expect(issue.message).toContain('at least 3:1');
+    }
+    const kit = await (await fetch(`${t.app.url}/api/brand`, { headers })).json();
+    expect(kit.brand).toMatchObject({ primaryColour: '#000000', accentColour: '#1b7f86' });
   });
 });
 
@@ -82,7 +103,10 @@ describe('report PDF and e-mail', () => {
     const calc = await (await fetch(`${t.app.url}/api/jobs/job_demo_basement/calculations/calc_demo_basement`, { headers: t.as(OWNER) })).json();
     expect(text).toContain('Results');
     expect(calc.calculation.results.status).toBe('runs');
-    expect(text).toMatch(/status: runs/);
+    // The verdict in the tool's own word, not the engine's code (QA s23 M4).
+    expect(text).toContain(`Verdict: ${lineVerdict(calc.calculation.results).word}.`);
+    expect(text).not.toMatch(/status: runs|layflat-hose/);
+    expect(text).toContain('Lay-flat discharge hose');
   });
 
   test('does send the PDF to the client through the e-mail fake', async () => {

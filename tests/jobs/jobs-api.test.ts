@@ -67,6 +67,35 @@ describe('calculations', () => {
   });
 });
 
+describe('PATCH /api/jobs/:id revision check (QA s23 H3: two tabs)', () => {
+  test('does save at the loaded revision, then refuse the stale tab with 409 and keep the first edit', async () => {
+    const job = (await (await call('/api/jobs', OWNER, { method: 'POST', body: { title: 'Two tabs', notes: 'old' } })).json()).job;
+    expect(job.revision).toBe(1);
+    const a = await call(`/api/jobs/${job.id}`, OWNER, { method: 'PATCH', body: { notes: 'TAB A: gate code 4471', revision: 1 } });
+    expect(a.status).toBe(200);
+    expect((await a.json()).job.revision).toBe(2);
+    const b = await call(`/api/jobs/${job.id}`, OWNER, { method: 'PATCH', body: { siteAddress: 'B', notes: 'old', revision: 1 } });
+    expect(b.status).toBe(409);
+    const conflict = await b.json();
+    expect(conflict).toMatchObject({ error: 'edit_conflict', job: { notes: 'TAB A: gate code 4471', revision: 2 } });
+    expect(conflict.message).toMatch(/saved this job after you opened it/);
+    const now = (await (await call(`/api/jobs/${job.id}`, OWNER)).json()).job;
+    expect(now).toMatchObject({ notes: 'TAB A: gate code 4471', siteAddress: '', revision: 2 });
+    const over = await call(`/api/jobs/${job.id}`, OWNER, { method: 'PATCH', body: { siteAddress: 'B', revision: 2 } });
+    expect((await over.json()).job).toMatchObject({ siteAddress: 'B', notes: 'TAB A: gate code 4471', revision: 3 });
+  });
+
+  test('does refuse an edit without a usable revision with 400 naming the field', async () => {
+    for (const revision of [undefined, 'one', 1.5, 0]) {
+      const r = await call('/api/jobs/job_demo_koi', OWNER, { method: 'PATCH', body: { title: 'x', revision } });
+      expect(r.status, String(revision)).toBe(400);
+      expect((await r.json()).issues[0].path).toBe('revision');
+    }
+    const only = await call('/api/jobs/job_demo_koi', OWNER, { method: 'PATCH', body: { revision: 1 } });
+    expect(only.status).toBe(400);
+  });
+});
+
 describe('organisation scoping', () => {
   test("does answer 404 for another organisation's job on every route", async () => {
     expect((await call('/api/jobs/job_t_other', OWNER)).status).toBe(404);

@@ -28,6 +28,13 @@ export function contrastRatio(a: string, b: string): number {
 }
 
 /** WCAG AA asks 4.5:1 for body text and 3:1 for large text and graphics. */
+export const AA_TEXT = 4.5;
+/**
+ * The least a brand colour may have on white: WCAG 2.1 SC 1.4.3 (large text, as the report's
+ * headings are) and SC 1.4.11 (graphics, as its figures and rules are) both ask 3:1.
+ */
+export const MIN_ON_PAPER = 3;
+
 export interface ContrastVerdict {
   ratio: number;
   /** Against white paper, as text is printed on the report. */
@@ -36,5 +43,5 @@ export interface ContrastVerdict {
 
 export function checkOnWhite(hex: string): ContrastVerdict {
   const ratio = contrastRatio(hex, '#ffffff');
-  return { ratio, textOnPaper: ratio >= 4.5 ? 'aa' : ratio >= 3 ? 'large_only' : 'fails' };
+  return { ratio, textOnPaper: ratio >= AA_TEXT ? 'aa' : ratio >= MIN_ON_PAPER ? 'large_only' : 'fails' };
 }

@@ -116,6 +116,7 @@ export function createJob(orgId: string, userId: string | null, fields: Partial<
     siteAddress: fields.siteAddress ?? '',
     notes: fields.notes ?? '',
     status: fields.status ?? 'scoping',
+    revision: 1,
     createdBy: userId,
     updatedBy: userId,
     createdAt: now,
@@ -125,19 +126,38 @@ export function createJob(orgId: string, userId: string | null, fields: Partial<
   return row;
 }
 
-/** Change some fields; null when the job is not this organisation's. */
-export function updateJob(orgId: string, jobId: string, userId: string | null, patch: Partial<JobFields>): JobRow | null {
+/** What an edit came to: the saved job, the newer job it lost to, or no such job. */
+export type JobUpdate =
+  | { kind: 'saved'; job: JobRow }
+  | { kind: 'stale'; current: JobRow }
+  | { kind: 'missing' };
+
+/**
+ * Change some fields, but only if the job is still at `revision` (the one the editor loaded), so
+ * a stale tab cannot silently overwrite a newer save; each edit bumps the revision by one.
+ */
+export function updateJob(
+  orgId: string,
+  jobId: string,
+  userId: string | null,
+  patch: Partial<JobFields>,
+  revision: number,
+): JobUpdate {
+  const mine = and(eq(jobs.organisationId, orgId), eq(jobs.id, jobId));
   const res = getDb()
     .update(jobs)
-    .set({ ...patch, updatedBy: userId, updatedAt: new Date() })
-    .where(and(eq(jobs.organisationId, orgId), eq(jobs.id, jobId)))
+    .set({ ...patch, revision: sql`${jobs.revision} + 1`, updatedBy: userId, updatedAt: new Date() })
+    .where(and(mine, eq(jobs.revision, revision)))
     .run();
-  return res.changes ? getJob(orgId, jobId) : null;
+  const row = getJob(orgId, jobId);
+  if (!row) return { kind: 'missing' };
+  return res.changes ? { kind: 'saved', job: row } : { kind: 'stale', current: row };
 }
 
 /**
  * Mark a job as changed now (a calculation was added or removed). Pass the transaction when the
- * change it records is made in one, so both land or neither does.
+ * change it records is made in one, so both land or neither does. The revision stays: it guards
+ * the job's own fields, which a calculation does not change.
  */
 export function touchJob(
   orgId: string,

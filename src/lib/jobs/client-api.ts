@@ -1,15 +1,20 @@
-/** A failed call: the server's words, its status and its error code (e.g. plan_required). */
+/** A refused call: the server's words as the message, plus its status and body (e.g. a 409's newer job). */
 export class ApiError extends Error {
   constructor(
     message: string,
     readonly status: number,
-    readonly code?: string,
+    readonly body: Record<string, unknown>,
   ) {
     super(message);
   }
+
+  /** The server's error code (e.g. plan_required), when it sent one. */
+  get code(): string | undefined {
+    return typeof this.body.error === 'string' ? this.body.error : undefined;
+  }
 }
 
-/** Browser-side calls to the jobs API; every failure becomes an ApiError with the server's words. */
+/** Browser-side calls to the jobs API; every failure becomes an Error with the server's words. */
 export async function api<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
   const r = await fetch(url, {
     method: init?.method ?? 'GET',
@@ -20,7 +25,7 @@ export async function api<T>(url: string, init?: { method?: string; body?: unkno
   const body = await r.json().catch(() => ({}));
   if (!r.ok) {
     const issues = (body.issues as { path: string; message: string }[] | undefined)?.map((i) => `${i.path} ${i.message}`).join('; ');
-    throw new ApiError(issues || body.message || `Request failed (${r.status}).`, r.status, body.error);
+    throw new ApiError(issues || body.message || `Request failed (${r.status}).`, r.status, body);
   }
   return body as T;
 }

@@ -3,10 +3,12 @@
  * units it was saved in, so a job's list of calculations reads without opening each one.
  */
 import type { DrainResult, LineResult, SiphonResult } from '../hydraulics/types';
-import type { QuantityKind, UnitSystem } from '../hydraulics/units';
+import type { UnitSystem } from '../hydraulics/units';
 import { formatQuantity } from '../hydraulics/units';
 import { drainVerdict, lineVerdict, siphonVerdict } from '../calculators/verdict';
 import type { Verdict } from '../calculators/verdict';
+import type { Figure } from '../calculators/quick-result';
+import { drainFigures, lineFigures, siphonFigures } from '../calculators/result-figures';
 import type { TOOL_NAMES } from './client-api';
 
 export type SavedTool = keyof typeof TOOL_NAMES;
@@ -16,21 +18,16 @@ export interface Headline {
   figures: { label: string; value: string }[];
 }
 
-/** Each tool's figures: label, result field (SI) and its kind. */
-const FIGURES: Record<SavedTool, [string, string, QuantityKind][]> = {
-  line: [
-    ['Flow', 'flow_m3_s', 'flow'],
-    ['Speed in the line', 'velocity_m_s', 'velocity'],
-  ],
-  siphon: [
-    ['Flow', 'flow_m3_s', 'flow'],
-    ['Pressure at the crest', 'crest_pressure_abs_pa', 'pressure'],
-  ],
-  drain: [
-    ['Time to the stop', 'time_s', 'time'],
-    ['Flow at the start', 'initial_flow_m3_s', 'flow'],
-    ['Water moved', 'volume_drained_m3', 'volume'],
-  ],
+/** Which of each tool's own result figures make its headline. */
+const HEADLINE_IDS: Record<SavedTool, string[]> = {
+  line: ['flow', 'velocity'],
+  siphon: ['flow', 'crest-pressure'],
+  drain: ['time', 'flow', 'drained'],
+};
+const TOOL_FIGURES: Record<SavedTool, (r: never) => Figure[]> = {
+  line: lineFigures,
+  siphon: siphonFigures,
+  drain: drainFigures,
 };
 
 function verdictOf(tool: SavedTool, results: Record<string, unknown>): Verdict | null {
@@ -46,11 +43,8 @@ export function headlineOf(
   results: Record<string, unknown>,
   system: UnitSystem,
 ): Headline {
-  const figures = FIGURES[tool].flatMap(([label, key, kind]) => {
-    const v = results[key];
-    return typeof v === 'number' && Number.isFinite(v)
-      ? [{ label, value: formatQuantity(kind, v, system) }]
-      : [];
-  });
+  const figures = TOOL_FIGURES[tool](results as never)
+    .filter((f) => HEADLINE_IDS[tool].includes(f.id) && typeof f.si === 'number' && Number.isFinite(f.si))
+    .map((f) => ({ label: f.label, value: formatQuantity(f.kind, f.si, system) }));
   return { verdict: verdictOf(tool, results), figures };
 }

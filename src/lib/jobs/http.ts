@@ -24,6 +24,16 @@ export function notFound(what = 'job'): HttpError {
   return new HttpError(404, { error: 'not_found', message: `No such ${what}.` });
 }
 
+/** The 409 body of an edit made on an older revision: the job as it now is, to compare or reload. */
+export function staleEdit(current: { revision: number }): Record<string, unknown> {
+  return {
+    error: 'edit_conflict',
+    message:
+      'Someone saved this job after you opened it, so your changes were not saved. Reload to see theirs, or save yours over them.',
+    job: current,
+  };
+}
+
 /** zod issues as the API's { path, message } list. */
 export function zodIssues(error: z.ZodError): Issue[] {
   return error.issues.map((i) => ({

@@ -13,7 +13,7 @@ export const jobFieldsSchema = z.strictObject({
   status: z.enum(JOB_STATUSES).default('scoping'),
 });
 
-export const jobPatchSchema = z
+const jobFieldsPatch = z
   .strictObject({
     title: text(200).min(1, 'cannot be empty'),
     client: text(200),
@@ -21,8 +21,17 @@ export const jobPatchSchema = z
     notes: text(20_000),
     status: z.enum(JOB_STATUSES),
   })
-  .partial()
-  .refine((p) => Object.keys(p).length > 0, { message: 'change at least one field' });
+  .partial();
+
+/** An edit names the revision it was loaded at, so a stale one is refused (409), not applied. */
+export const jobPatchSchema = jobFieldsPatch
+  .extend({
+    revision: z
+      .number({ error: 'is required: the revision the job was loaded at' })
+      .int('must be a whole number')
+      .min(1, 'must be at least 1'),
+  })
+  .refine((p) => Object.keys(p).length > 1, { message: 'change at least one field' });
 
 const intParam = (min: number, max: number): z.ZodType<number> =>
   z.coerce.number().int('must be a whole number').min(min).max(max);

@@ -2,7 +2,7 @@ import type { APIRoute } from 'astro';
 import { listCalculations } from '../../../../lib/data/calculations';
 import { deleteJob, getJob, updateJob } from '../../../../lib/data/jobs';
 import { listShares } from '../../../../lib/data/report-shares';
-import { handle, jsonBody, notFound, parseWith } from '../../../../lib/jobs/http';
+import { handle, jsonBody, notFound, parseWith, staleEdit } from '../../../../lib/jobs/http';
 import { jobPatchSchema } from '../../../../lib/jobs/schemas';
 import { jobsViewer, jobsWriter } from '../../../../lib/jobs/viewer';
 
@@ -20,15 +20,16 @@ export const GET: APIRoute = ({ locals, params }) =>
     });
   });
 
-/** Change the job's fields. */
+/** Change the job's fields, if nobody saved it since the editor loaded `revision`. */
 export const PATCH: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
     const viewer = jobsWriter(locals);
     if (!getJob(viewer.orgId, params.id ?? '')) throw notFound();
-    const patch = parseWith(jobPatchSchema, await jsonBody(request));
-    const job = updateJob(viewer.orgId, params.id ?? '', viewer.userId, patch);
-    if (!job) throw notFound();
-    return Response.json({ job });
+    const { revision, ...patch } = parseWith(jobPatchSchema, await jsonBody(request));
+    const r = updateJob(viewer.orgId, params.id ?? '', viewer.userId, patch, revision);
+    if (r.kind === 'missing') throw notFound();
+    if (r.kind === 'stale') return Response.json(staleEdit(r.current), { status: 409 });
+    return Response.json({ job: r.job });
   });
 
 /** Delete the job and its calculations. */
