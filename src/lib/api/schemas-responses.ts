@@ -114,7 +114,6 @@ export const errorSchema = component(
   z.strictObject({
     error: z.enum([
       'invalid_input',
-      'cannot_compute',
       'method_not_allowed',
       'payload_too_large',
       'unsupported_media_type',
