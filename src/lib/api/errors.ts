@@ -46,6 +46,13 @@ export function methodNotAllowed(allowed: readonly string[]): ApiAnswer {
   );
 }
 
+/** 404 for a path under /api/v1/ that is no route (the spec names none; same shape as the rest). */
+export function notFound(): ApiAnswer {
+  return errorAnswer(404, 'not_found', [
+    issueAt('', 'there is no API v1 route at this path; see GET /api/v1/openapi.json'),
+  ]);
+}
+
 export function payloadTooLarge(limitBytes: number): ApiAnswer {
   return errorAnswer(413, 'payload_too_large', [
     issueAt('', `the body is larger than ${limitBytes / 1024} KiB`),

@@ -114,6 +114,7 @@ export const errorSchema = component(
   z.strictObject({
     error: z.enum([
       'invalid_input',
+      'not_found',
       'method_not_allowed',
       'payload_too_large',
       'unsupported_media_type',

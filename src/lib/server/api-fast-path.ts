@@ -104,8 +104,8 @@ function routePath(target: string): string {
 
 /**
  * Answer the request if it is an API v1 route and return true; otherwise return false and leave
- * it to Astro, which answers unknown /api/v1 paths with its 404 and routes unusual spellings of
- * known ones (dot segments, escapes) itself. `baseHeaders` are the security headers every
+ * it to Astro, which routes unusual spellings of known ones (dot segments, escapes) itself and
+ * answers the rest with the API's JSON 404 (src/pages/api/v1/[...rest].ts). `baseHeaders` are the security headers every
  * response carries, as a flat name, value, … list.
  */
 export function serveApiV1(
