@@ -35,7 +35,7 @@ export default function PressureTable({ points, vaporPa, limitPa, system }: Prop
         {rows.map((p, i) => (
           <tr
             key={i}
-            className={`border-b border-rule/60 ${p.p_pa < limitPa ? 'font-bold text-verdict-fails' : ''}`}
+            className={`border-b border-rule/60 ${p.p_pa < Math.max(limitPa, vaporPa) ? 'font-bold text-verdict-fails' : ''}`}
           >
             <td>{formatQuantity('length', p.s_m, system)}</td>
             <td className="text-right">{formatQuantity('elevation', p.z_m, system)}</td>

@@ -1,7 +1,8 @@
 /**
  * Property tests (fast-check): random JSON, mutated valid requests and random in-range requests
- * thrown at each endpoint. Never a 5xx; errors always in the spec's shape; and valid-looking input
- * never reaches the engine's 422 `cannot_compute`, so an engine failure makes this test fail.
+ * thrown at each endpoint. Never a 5xx; errors always a 400 in the spec's shape (no 422: the spec
+ * has none); and no input the schema accepts reaches the engine's "no finite result" answer, so
+ * an engine failure, or a schema bound too loose for the engine, makes this test fail.
  */
 import fc from 'fast-check';
 import type { APIRoute } from 'astro';
@@ -35,23 +36,28 @@ const endpoints: [
   ['drain', drain, drainRequest, drainResultSchema],
 ];
 
+/** The issue of the 400 for inputs the schema accepted but the engine could not compute. */
+const NO_FINITE = /no finite result/;
+
 /**
- * Status and body checks every answer must pass; returns the status. `allow422`: random values
- * include magnitudes no site has (a 1e-300 m bore, a 1e305 m tank) where the engine's floating
- * point underflows or overflows; the API must then still answer its JSON 422, never 5xx or null.
+ * Status and body checks every answer must pass; returns the status. `tinyLevel`: a level a
+ * few hundred orders of magnitude below a millimetre (5e-324) makes a head the engine's floating
+ * point underflows on; no bound can refuse it (a level may be any number near 0), so there, and
+ * only there, the "no finite result" 400 is the expected answer.
  */
 async function checkAnswer(
   res: Response,
   result: { parse: (v: unknown) => unknown },
-  allow422 = false,
+  tinyLevel = false,
 ): Promise<number> {
   expect(res.status).toBeLessThan(500);
   const json = await res.json();
   if (res.status === 200) result.parse(json);
   else {
     const err = errorSchema.parse(json);
-    if (!allow422) expect(err.error).not.toBe('cannot_compute');
-    expect(res.status).toBe(err.error === 'cannot_compute' ? 422 : 400);
+    expect(res.status).toBe(400);
+    expect(err.error).toBe('invalid_input');
+    if (!tinyLevel) for (const i of err.issues) expect(i.message).not.toMatch(NO_FINITE);
     for (const i of err.issues)
       expect(i.message.toLowerCase().startsWith(i.path.toLowerCase())).toBe(true);
   }
@@ -93,7 +99,8 @@ describe.each(endpoints)('POST /api/v1/%s under random input', (name, route, sam
     await fc.assert(
       fc.asyncProperty(fc.constantFrom(...paths), fc.jsonValue(), async (path, value) => {
         const body = withField(sample, path, value);
-        await checkAnswer(await callRoute(route, url, { body }), result, true);
+        const tiny = typeof value === 'number' && value !== 0 && Math.abs(value) < 1e-290;
+        await checkAnswer(await callRoute(route, url, { body }), result, tiny);
       }),
       { numRuns: 400 },
     );
@@ -106,9 +113,9 @@ describe('random in-range requests', () => {
     ['siphon', siphon, siphonArb, siphonResultSchema],
     ['drain', drain, drainArb, drainResultSchema],
   ];
-  // Magnitudes a site can have (levels ±200 m, bores 0.1 mm–5 m): here a 422 is an engine bug.
+  // Magnitudes a site can have (levels ±200 m, bores 0.1 mm–5 m): "no finite result" is a bug.
   test.each(cases)(
-    'POST /api/v1/%s computes them (200, or 400 for a cross-field rule), never 422',
+    'POST /api/v1/%s computes them (200, or 400 for a cross-field rule), never "no finite result"',
     async (name, route, arb, result) => {
       await fc.assert(
         fc.asyncProperty(arb, async (body) => {
@@ -137,11 +144,50 @@ describe('random in-range requests', () => {
 });
 
 describe('magnitudes beyond floating point', () => {
-  test('answer a JSON 422 cannot_compute, not a 5xx or a null number', async () => {
-    // Known engine limit (reported): velocity underflows and f = 64/Re becomes Infinity.
-    const body = withField(lineRequest, 'line.inner_diameter_m', 1e-300);
-    const res = await callRoute(line, '/api/v1/line', { body });
-    expect(res.status).toBe(422);
-    expect(errorSchema.parse(await res.json()).error).toBe('cannot_compute');
-  });
+  // These once answered 422 cannot_compute (velocity underflowed, f = 64/Re became Infinity; a
+  // 1e300 m level overflowed): now the schema's bounds refuse them with a 400 naming the field.
+  test.each([
+    [
+      'line',
+      line,
+      withField(lineRequest, 'line.inner_diameter_m', 1e-300),
+      ['line.inner_diameter_m'],
+    ],
+    [
+      'line',
+      line,
+      {
+        fluid: { density_kg_m3: 1e300, viscosity_pa_s: 1e-300, vapor_pressure_pa: 1 },
+        line: { inner_diameter_m: 5, length_m: 100000, roughness_m: 0 },
+        source_level_m: 1e300,
+        outlet_elevation_m: -1e300,
+      },
+      ['fluid.density_kg_m3', 'fluid.viscosity_pa_s', 'source_level_m', 'outlet_elevation_m'],
+    ],
+    [
+      'drain',
+      drain,
+      {
+        vessel: { shape: 'box', length_m: 1e300, width_m: 1e300, depth_m: 1e300 },
+        initial_depth_m: 1e300,
+        outlet: { type: 'orifice', diameter_m: 1e-300 },
+      },
+      [
+        'vessel.length_m',
+        'vessel.width_m',
+        'vessel.depth_m',
+        'initial_depth_m',
+        'outlet.diameter_m',
+      ],
+    ],
+  ] as const)(
+    'answer POST /api/v1/%s with 400 naming each field',
+    async (name, route, body, paths) => {
+      const res = await callRoute(route, `/api/v1/${name}`, { body });
+      expect(res.status).toBe(400);
+      const err = errorSchema.parse(await res.json());
+      expect(err.error).toBe('invalid_input');
+      expect(err.issues.map((i) => i.path).sort()).toEqual([...paths].sort());
+    },
+  );
 });

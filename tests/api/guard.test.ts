@@ -34,15 +34,19 @@ describe('guarded', () => {
     expect(headers['Cache-Control']).toBe('no-store');
   });
 
-  test('does turn a thrown error or a rejection into 422 cannot_compute', async () => {
+  test('does turn a thrown error or a rejection into a 400 saying the inputs give no finite result', async () => {
     vi.stubEnv('CALC_RATE_LIMIT_PER_MINUTE', '0');
     const thrown = guarded(() => {
       throw new Error('boom');
     })(request) as ApiAnswer;
     const rejected = await guarded(() => Promise.reject(new Error('boom')))(request);
     for (const answer of [thrown, rejected]) {
-      expect(answer.status).toBe(422);
-      expect(answer.body).toMatchObject({ error: 'cannot_compute' });
+      // The spec allows no 422 or 500 for any input: 400 invalid_input, request id in the issue.
+      expect(answer.status).toBe(400);
+      expect(answer.body).toMatchObject({ error: 'invalid_input' });
+      const [issue] = (answer.body as { issues: { path: string; message: string }[] }).issues;
+      expect(issue.path).toBe('');
+      expect(issue.message).toMatch(/no finite result \(request guard-test\)/);
       expect(answer.headers['Access-Control-Allow-Origin']).toBe('*');
     }
   });

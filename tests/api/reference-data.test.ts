@@ -111,7 +111,15 @@ describe('GET /api/v1/openapi.json', () => {
     const schemas = (json.components as { schemas: Record<string, Record<string, any>> }).schemas;
     const line = schemas.Line;
     expect(line.additionalProperties).toBe(false);
-    expect(line.properties.inner_diameter_m).toMatchObject({ exclusiveMinimum: 0, maximum: 5 });
+    // 0.1 mm: the physical bound of schema-bounds.ts; 5 m the spec's.
+    expect(line.properties.inner_diameter_m).toMatchObject({ minimum: 0.0001, maximum: 5 });
+    expect(schemas.LineRequest.properties.source_level_m).toMatchObject({
+      minimum: -20_000,
+      maximum: 20_000,
+    });
+    // No 422 anywhere: the spec allows 400, 405, 413, 415 and 429 only.
+    for (const path of Object.values(json.paths as Record<string, Record<string, any>>))
+      for (const op of Object.values(path)) expect(Object.keys(op.responses)).not.toContain('422');
     expect(line.properties.length_m).toMatchObject({ minimum: 0, maximum: 100_000 });
     expect(line.properties.parallel_lines).toMatchObject({
       type: 'integer',

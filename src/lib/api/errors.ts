@@ -46,6 +46,13 @@ export function methodNotAllowed(allowed: readonly string[]): ApiAnswer {
   );
 }
 
+/** 404 for a path under /api/v1/ that is no route (the spec names none; same shape as the rest). */
+export function notFound(): ApiAnswer {
+  return errorAnswer(404, 'not_found', [
+    issueAt('', 'there is no API v1 route at this path; see GET /api/v1/openapi.json'),
+  ]);
+}
+
 export function payloadTooLarge(limitBytes: number): ApiAnswer {
   return errorAnswer(413, 'payload_too_large', [
     issueAt('', `the body is larger than ${limitBytes / 1024} KiB`),
@@ -68,15 +75,13 @@ export function rateLimited(retryAfterS: number): ApiAnswer {
 }
 
 /**
- * 422: the input passed every check but the engine produced no usable answer (an engine bug or a
- * case it cannot represent). Logged server-side with the request id; no detail leaves the server.
+ * 400 for inputs that passed every check yet give no finite result (the spec allows no other
+ * status for input). The schema's bounds are meant to make this unreachable: it is logged
+ * server-side with the request id, and no detail leaves the server.
  */
-export function cannotCompute(requestId?: string): ApiAnswer {
+export function noFiniteResult(requestId?: string): ApiAnswer {
   const ref = requestId ? ` (request ${requestId})` : '';
-  return errorAnswer(422, 'cannot_compute', [
-    issueAt(
-      '',
-      `the engine could not compute a result for this input${ref}; check the input or report it`,
-    ),
+  return invalidInput([
+    issueAt('', `these inputs give no finite result${ref}; check the figures or report it`),
   ]);
 }

@@ -1,8 +1,9 @@
 /**
  * The envelope every API v1 handler runs in: CORS on every answer, the rate limit, and no
  * unexpected error ever leaving as a 500 or a stack trace. Engine failures are logged with the
- * request id and answered 422 `cannot_compute`, a code valid input must never produce: the tests
- * assert that, so engine bugs still show.
+ * request id and answered 400 `invalid_input` with the issue "these inputs give no finite
+ * result", which in-range input must never produce: the tests assert that, so engine bugs still
+ * show.
  */
 import { EngineInputError } from '../hydraulics/types';
 import { logger } from '../server/logger';
@@ -10,7 +11,7 @@ import { logPath } from '../server/redact';
 import type { ApiAnswer, ApiOperation, ApiRequest } from './answer';
 import { jsonAnswer } from './answer';
 import { withCors } from './cors';
-import { cannotCompute, invalidInput } from './errors';
+import { invalidInput, noFiniteResult } from './errors';
 import { allFinite } from './finite-result';
 import { issueAt } from './issues';
 import { checkRateLimit } from './rate-limit';
@@ -29,7 +30,7 @@ function logUnexpected(request: ApiRequest, error: unknown): void {
 
 function failure(request: ApiRequest, error: unknown): ApiAnswer {
   logUnexpected(request, error);
-  return withCors(cannotCompute(request.requestId));
+  return withCors(noFiniteResult(request.requestId));
 }
 
 /** An answer with the no-store default and CORS. */
@@ -38,7 +39,7 @@ function finish(answer: ApiAnswer): ApiAnswer {
   return withCors(answer);
 }
 
-/** A handler's answer, finished; any thrown error becomes a 422. */
+/** A handler's answer, finished; any thrown error becomes the no-finite-result 400. */
 function settle(request: ApiRequest, handler: ApiOperation): ApiAnswer | Promise<ApiAnswer> {
   try {
     const answer = handler(request);
@@ -50,7 +51,7 @@ function settle(request: ApiRequest, handler: ApiOperation): ApiAnswer | Promise
 }
 
 /**
- * Wrap a handler: rate limit first, CORS always, and a JSON 422 instead of any thrown error.
+ * Wrap a handler: rate limit first, CORS always, and a JSON 400 instead of any thrown error.
  * Synchronous whenever the handler and the limit are, so the short path adds no promise.
  */
 export function guarded(handler: ApiOperation): ApiOperation {
@@ -71,7 +72,8 @@ export function guarded(handler: ApiOperation): ApiOperation {
 
 /**
  * Run an engine call and answer it: 200 with the result, 400 naming the field the engine
- * rejected, or 422 when the engine throws anything else or returns a non-finite number.
+ * rejected, or the no-finite-result 400 when the engine throws anything else or returns a
+ * non-finite number.
  */
 export function answer(request: ApiRequest, compute: () => unknown): ApiAnswer {
   let result: unknown;
@@ -81,11 +83,11 @@ export function answer(request: ApiRequest, compute: () => unknown): ApiAnswer {
     if (error instanceof EngineInputError)
       return invalidInput([issueAt(error.path, error.message)]);
     logUnexpected(request, error);
-    return cannotCompute(request.requestId);
+    return noFiniteResult(request.requestId);
   }
   if (!allFinite(result)) {
     logUnexpected(request, new Error('engine result has a non-finite number'));
-    return cannotCompute(request.requestId);
+    return noFiniteResult(request.requestId);
   }
   return jsonAnswer(200, result, { 'Cache-Control': 'no-store' });
 }

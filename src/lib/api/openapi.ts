@@ -48,11 +48,11 @@ function calc(summary: string, request: string, result: string): Json {
       responses: {
         '200': { description: 'Result', content: { 'application/json': { schema: ref(result) } } },
         '400': errorAnswer(
-          'Invalid input: malformed JSON, wrong type, missing or unknown field, value out of range',
+          'Invalid input: malformed JSON, wrong type, missing or unknown field, value out of ' +
+            'range (the schema’s bounds), or, never expected, inputs that give no finite result',
         ),
         '413': errorAnswer(`Body over ${MAX_BODY_BYTES / 1024} KiB`),
         '415': errorAnswer('Body is not JSON'),
-        '422': errorAnswer('Valid input the engine could not compute (reported, never expected)'),
         ...limitAnswers,
       },
     },

@@ -3,15 +3,26 @@
  * Vessel dimensions are in metres; depths are measured up from the vessel's lowest point.
  */
 import { z } from 'zod';
-import { elevation, fluidSchema, lineSchema, siteSchema } from './schemas-common';
+import { elevation, fluidSchema, level, lineSchema, siteSchema } from './schemas-common';
+import {
+  AREA_MAX_M2,
+  CD_MIN,
+  COUNT_MAX,
+  SIDE_SLOPE_MAX,
+  SIZE_MAX_M,
+  SIZE_MIN_M,
+} from './schema-bounds';
 import { crestFields } from './schemas-requests';
 import { component, described } from './schema-registry';
 
-const size = (what: string): z.ZodNumber => described(z.number().gt(0), `${what}, m`);
+const length = (): z.ZodNumber => z.number().min(SIZE_MIN_M).max(SIZE_MAX_M);
+const size = (what: string): z.ZodNumber => described(length(), `${what}, m`);
+/** A depth above the lowest point: 0 up to the largest vessel size. */
+const depth = (): z.ZodNumber => z.number().min(0).max(SIZE_MAX_M);
 
 const stagePointSchema = z.strictObject({
-  depth_m: described(z.number().min(0), 'Depth above the lowest point, m'),
-  area_m2: described(z.number().gt(0), 'Free-surface area at that depth, m²'),
+  depth_m: described(depth(), 'Depth above the lowest point, m'),
+  area_m2: described(z.number().gt(0).max(AREA_MAX_M2), 'Free-surface area at that depth, m²'),
 });
 
 export const vesselSchema = component(
@@ -43,7 +54,10 @@ export const vesselSchema = component(
       shape: z.literal('sloped_pond'),
       bottom_length_m: size('Length of the flat bottom'),
       bottom_width_m: size('Width of the flat bottom'),
-      side_slope_h_per_v: described(z.number().min(0), 'Side slope, horizontal per vertical'),
+      side_slope_h_per_v: described(
+        z.number().min(0).max(SIDE_SLOPE_MAX),
+        'Side slope, horizontal per vertical',
+      ),
       depth_m: size('Depth from the bottom to the top of the banks'),
     }),
     z.strictObject({
@@ -62,25 +76,25 @@ const orificeSchema = z.strictObject({
   type: z.literal('orifice'),
   diameter_m: size('Orifice diameter'),
   discharge_coefficient: described(
-    z.number().gt(0).max(1).default(0.61),
+    z.number().min(CD_MIN).max(1).default(0.61),
     'Cd (0.61: sharp-edged, common practice)',
   ),
   elevation_m: described(
-    z.number().optional(),
+    level().optional(),
     'Elevation of the orifice centre, m above your datum; default the vessel bottom',
   ),
-  count: described(z.int().min(1).default(1), 'Identical orifices'),
+  count: described(z.int().min(1).max(COUNT_MAX).default(1), 'Identical orifices'),
 });
 
 const lineOutletSchema = z.strictObject({
   type: z.literal('line'),
   line: lineSchema,
   intake_elevation_m: described(
-    z.number().optional(),
+    level().optional(),
     'Elevation of the intake, m above your datum; default the vessel bottom',
   ),
   outlet_elevation_m: elevation('Elevation of the outlet'),
-  tailwater_level_m: described(z.number().optional(), 'Level of standing water over the outlet, m'),
+  tailwater_level_m: described(level().optional(), 'Level of standing water over the outlet, m'),
 });
 
 const siphonOutletSchema = z.strictObject({
@@ -89,7 +103,7 @@ const siphonOutletSchema = z.strictObject({
   intake_elevation_m: elevation('Elevation of the intake'),
   ...crestFields,
   outlet_elevation_m: elevation('Elevation of the outlet'),
-  tailwater_level_m: described(z.number().optional(), 'Level of standing water over the outlet, m'),
+  tailwater_level_m: described(level().optional(), 'Level of standing water over the outlet, m'),
 });
 
 export const outletSchema = component(
@@ -104,11 +118,14 @@ export const drainRequestSchema = component(
     site: siteSchema.optional(),
     vessel: vesselSchema,
     bottom_elevation_m: described(
-      z.number().default(0),
+      level().default(0),
       'Elevation of the vessel’s lowest point, m above your datum',
     ),
-    initial_depth_m: described(z.number().gt(0), 'Starting depth, m; at most the vessel depth'),
-    final_depth_m: described(z.number().min(0).default(0), 'Target depth, m; below the start'),
+    initial_depth_m: described(
+      z.number().gt(0).max(SIZE_MAX_M),
+      'Starting depth, m; at most the vessel depth',
+    ),
+    final_depth_m: described(depth().default(0), 'Target depth, m; below the start'),
     outlet: outletSchema,
     curve_points: described(
       z.int().min(2).max(2000).default(100),

@@ -6,11 +6,14 @@ import { WATER_T_MAX_C, WATER_T_MIN_C } from '../hydraulics/water';
 import {
   elevation,
   fluidSchema,
+  level,
   lineSchema,
+  lossK,
   SITE_ALTITUDE_MAX_M,
   SITE_ALTITUDE_MIN_M,
   siteSchema,
 } from './schemas-common';
+import { PRESSURE_MAX_PA } from './schema-bounds';
 import { component, described } from './schema-registry';
 
 const lineFields = {
@@ -20,7 +23,7 @@ const lineFields = {
   source_level_m: elevation('Level of the source’s free surface'),
   outlet_elevation_m: elevation('Elevation of the outlet'),
   tailwater_level_m: described(
-    z.number().optional(),
+    level().optional(),
     'Level of standing water over the outlet, m above your datum; counts when above the outlet',
   ),
 };
@@ -33,11 +36,11 @@ export const crestFields = {
     'Length of line from the intake to the crest, m; at most line.length_m',
   ),
   minor_loss_k_to_crest: described(
-    z.number().min(0).default(0),
+    lossK().default(0),
     'Fittings K between intake and crest; at most the line’s total fittings K',
   ),
   min_crest_pressure_pa: described(
-    z.number().min(0).optional(),
+    z.number().min(0).max(PRESSURE_MAX_PA).optional(),
     'Lowest absolute crest pressure accepted, Pa. Default: vapour pressure plus 20 % of the ' +
       'margin to atmospheric (common practice, allows for air coming out of solution).',
   ),

@@ -114,7 +114,7 @@ export const errorSchema = component(
   z.strictObject({
     error: z.enum([
       'invalid_input',
-      'cannot_compute',
+      'not_found',
       'method_not_allowed',
       'payload_too_large',
       'unsupported_media_type',

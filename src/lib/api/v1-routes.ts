@@ -5,7 +5,7 @@
  */
 import type { ApiOperation } from './answer';
 import { preflight, withCors } from './cors';
-import { methodNotAllowed } from './errors';
+import { methodNotAllowed, notFound } from './errors';
 import {
   catalogOperation,
   drainOperation,
@@ -49,3 +49,6 @@ export function v1Operation(path: string, method: string): ApiOperation | undefi
   const found = Object.hasOwn(ROUTES, path) ? ROUTES[path] : undefined;
   return found && (found[method] ?? found.ALL);
 }
+
+/** Any method on a path under /api/v1/ that is none of the routes: the JSON 404, with CORS. */
+export const v1NotFound: ApiOperation = () => withCors(notFound());

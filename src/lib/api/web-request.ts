@@ -5,6 +5,7 @@
 import type { APIContext, APIRoute } from 'astro';
 import type { ApiOperation, ApiRequest, BodyBytes } from './answer';
 import { toResponse } from './answer';
+import { routeClientAddress } from '../server/client-address';
 import { concatChunks } from './body';
 
 /** The body of a web Request with a byte cap and a deadline; stops reading at the cap. */
@@ -42,15 +43,6 @@ export async function readWebBody(
   return { ok: true, bytes: concatChunks(chunks, total) };
 }
 
-/** The client address Astro reports (first X-Forwarded-For entry, else the socket). */
-function clientAddressOf(context: APIContext): string {
-  try {
-    return context.clientAddress || 'unknown';
-  } catch {
-    return 'unknown';
-  }
-}
-
 function fromContext(context: APIContext): ApiRequest {
   const { request } = context;
   return {
@@ -58,7 +50,7 @@ function fromContext(context: APIContext): ApiRequest {
     url: context.url,
     header: (name) => request.headers.get(name),
     readBody: (limit, deadlineMs) => readWebBody(request, limit, deadlineMs),
-    clientAddress: clientAddressOf(context),
+    clientAddress: routeClientAddress(context),
     requestId: context.locals?.requestId ?? '-',
   };
 }

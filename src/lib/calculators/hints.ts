@@ -15,6 +15,7 @@ import {
   smallestSizeForFlow,
   solveLine,
   solveSiphon,
+  workingCrestPressure,
 } from '../hydraulics';
 
 export interface Hint {
@@ -92,7 +93,8 @@ export function siphonHints(req: SiphonRequest, r: SiphonResult, sizeId: string,
   if (r.status === 'no_flow') return [{ id: 'no-head', text: 'Lower the outlet below the source surface: a siphon needs its outlet below the water it draws from.' }];
   const out: Hint[] = [];
   const above = req.crest_elevation_m - req.source_level_m;
-  const marginM = (r.crest_pressure_abs_pa - r.crest_limit_pa) / (G * resolveFluid(req.fluid).density_kg_m3);
+  const floor = workingCrestPressure(r.crest_limit_pa, r.vapor_pressure_pa);
+  const marginM = (r.crest_pressure_abs_pa - floor) / (G * resolveFluid(req.fluid).density_kg_m3);
   if (r.status !== 'runs')
     out.push({ id: 'lower-crest', text: `Lower crest: bring the crest down by about ${formatQuantity('length', -marginM, sys)} (to ${formatQuantity('length', above + marginM, sys)} above the water) to get inside the working limit.` });
   const solve: Solve = (q) => solveSiphon({ ...req, ...q });

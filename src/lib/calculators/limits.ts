@@ -2,7 +2,7 @@
  * What limits a result: the biggest share of the head loss, and a siphon's room at the crest.
  */
 import type { LossBreakdown, SiphonResult } from '../hydraulics';
-import { G } from '../hydraulics';
+import { G, workingCrestPressure } from '../hydraulics';
 
 export type LossPart = keyof LossBreakdown;
 
@@ -33,9 +33,11 @@ export function biggestLoss(losses: LossBreakdown): BiggestLoss | null {
 
 /**
  * Room at the crest, as water height: how much higher the crest could go before its pressure
- * reaches the working limit, (p_crest − p_limit)/(ρg), m. Negative when already past it.
+ * reaches the working limit (never below the vapour pressure), (p_crest − p_limit)/(ρg), m.
+ * Negative when already past it.
  * @param densityKgM3 density of the liquid, kg/m³.
  */
 export function crestMarginM(r: SiphonResult, densityKgM3: number): number {
-  return (r.crest_pressure_abs_pa - r.crest_limit_pa) / (densityKgM3 * G);
+  const floor = workingCrestPressure(r.crest_limit_pa, r.vapor_pressure_pa);
+  return (r.crest_pressure_abs_pa - floor) / (densityKgM3 * G);
 }

@@ -11,6 +11,7 @@ import { trackRequest } from '../server/access-log';
 import { releaseAstroRequest } from '../server/astro-request-release';
 import { serveApiV1 } from '../server/api-fast-path';
 import { closeIfBodyUnread, refuseOversizedBody } from '../server/body-limit';
+import { pinClientAddress } from '../server/client-address';
 import { compress } from '../server/compression';
 import { routeConsoleToLogger } from '../server/console-bridge';
 import { logger } from '../server/logger';
@@ -44,6 +45,8 @@ async function main(): Promise<void> {
     // unread body itself, and its small JSON answers skip compression: it goes first, past the
     // page machinery.
     if (serveApiV1(req, res, apiHeaders)) return;
+    // Pages and endpoints (flags, sign-in) see the same client address as API v1.
+    pinClientAddress(req);
     const id = trackRequest(req, res);
     releaseAstroRequest(req, res);
     for (const [name, value] of headers) res.setHeader(name, value);

@@ -5,7 +5,7 @@
 import { G } from './constants';
 import { drivingHead, lineFlowAtHead, resolveLine } from './line';
 import type { LineState, ResolvedLine } from './line';
-import { crestPressureAt, defaultCrestLimit, resolveCrest } from './siphon';
+import { crestPressureAt, defaultCrestLimit, resolveCrest, workingCrestPressure } from './siphon';
 import { brentRoot } from './roots';
 import type {
   DrainStopReason,
@@ -150,14 +150,17 @@ function lineModel(o: LineOutlet | SiphonOutlet, path: string, ctx: OutletContex
 
 /**
  * Siphon: the line's flow law plus the crest check. The highest depth at which the crest
- * pressure falls to its limit (found by a scan from the top and a bracketed root) becomes the
- * cutoff with reason `siphon_breaks` when it lies above the line's own cutoff.
+ * pressure falls to its working pressure (the limit, and never below the vapour pressure; found
+ * by a scan from the top and a bracketed root) becomes the cutoff with reason `siphon_breaks`
+ * when it lies above the line's own cutoff.
  */
 function siphonModel(o: SiphonOutlet, path: string, ctx: OutletContext): OutletModel {
   const m = lineModel(o, path, ctx);
   const crest = resolveCrest(m.line!, o, ctx.fluid, ctx.atmosphericPa, path);
+  // The run stops at the limit, or at the vapour pressure when the limit is below it.
+  const floor = workingCrestPressure(crest.limitPa, crest.vaporPa);
   const excess = (h: number): number =>
-    crestPressureAt(crest, ctx.bottomM + h, m.state!(h)) - crest.limitPa;
+    crestPressureAt(crest, ctx.bottomM + h, m.state!(h)) - floor;
   const top = ctx.initialDepthM;
   if (m.cutoff >= top) return m;
   const startPa = crestPressureAt(crest, ctx.bottomM + top, m.state!(top));

@@ -32,6 +32,28 @@ export function defaultCrestLimit(atmosphericPa: number, vaporPa: number): numbe
   return vaporPa + DEFAULT_CREST_MARGIN_FRACTION * Math.max(0, atmosphericPa - vaporPa);
 }
 
+/**
+ * Lowest crest pressure at which the siphon still counts as running full: the limit, but never
+ * below the vapour pressure, where the liquid boils at the crest and the siphon breaks whatever
+ * limit the caller accepted.
+ * @returns absolute pressure, Pa.
+ */
+export function workingCrestPressure(limitPa: number, vaporPa: number): number {
+  return Math.max(limitPa, vaporPa);
+}
+
+/**
+ * Verdict of a flowing siphon from its crest pressure: `breaks` below the vapour pressure,
+ * `marginal` from the vapour pressure up to the limit, `runs` at or above both.
+ */
+export function crestStatus(
+  crest: Pick<ResolvedCrest, 'limitPa' | 'vaporPa'>,
+  crestPa: number,
+): 'runs' | 'marginal' | 'breaks' {
+  if (!(crestPa >= crest.vaporPa)) return 'breaks';
+  return crestPa >= crest.limitPa ? 'runs' : 'marginal';
+}
+
 /** The crest part of a siphon input (same field names in SiphonRequest and a drain SiphonOutlet). */
 export interface CrestInput {
   crest_elevation_m: number;
@@ -137,7 +159,8 @@ export function maxCrestHeightAt(crest: ResolvedCrest, state: LineState): number
 
 /**
  * Source level, between sinkLevelM (where the head is zero) and topLevelM, at which the crest
- * pressure falls to the crest's limit as the source falls. Crest pressure rises with the source
+ * pressure falls to the crest's working pressure ({@link workingCrestPressure}: the limit, or
+ * the vapour pressure when the limit is below it) as the source falls. Crest pressure rises with the source
  * level, so Brent's method on the bracket finds the single crossing (to 1e-9 m).
  * @returns topLevelM when already at or below the limit there; null when the limit is not
  *   reached before the head runs out.
@@ -157,8 +180,9 @@ export function siphonBreakLevel(
     frictionFactor: 0,
     regime: 'laminar',
   };
+  const floor = workingCrestPressure(crest.limitPa, crest.vaporPa);
   const margin = (z: number): number =>
-    crestPressureAt(crest, z, lineFlowAtHead(line, z - sinkLevelM, fluid, st)) - crest.limitPa;
+    crestPressureAt(crest, z, lineFlowAtHead(line, z - sinkLevelM, fluid, st)) - floor;
   if (margin(topLevelM) <= 0) return topLevelM;
   if (margin(sinkLevelM) >= 0) return null;
   const z = brentRoot(margin, sinkLevelM, topLevelM, 1e-9);

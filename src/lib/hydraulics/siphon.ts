@@ -8,17 +8,25 @@ import type { SiphonRequest, SiphonResult, Warning } from './types';
 import { ENGINE_VERSION } from './constants';
 import { resolveAtmosphere, resolveFluid } from './fluid';
 import { levelsOf, lineFlowAtHead, lossesAt, resolveLine } from './line';
-import { crestPressureAt, maxCrestHeightAt, resolveCrest, siphonBreakLevel } from './siphon-crest';
+import {
+  crestPressureAt,
+  crestStatus,
+  maxCrestHeightAt,
+  resolveCrest,
+  siphonBreakLevel,
+} from './siphon-crest';
 import { flowWarnings, makeWarning } from './warnings';
 
 export type { CrestInput, ResolvedCrest } from './siphon-crest';
 export {
   DEFAULT_CREST_MARGIN_FRACTION,
   crestPressureAt,
+  crestStatus,
   defaultCrestLimit,
   maxCrestHeightAt,
   resolveCrest,
   siphonBreakLevel,
+  workingCrestPressure,
 } from './siphon-crest';
 
 /** Sink level of a request: the outlet, or a tailwater above it. */
@@ -52,13 +60,7 @@ export function solveSiphon(req: SiphonRequest): SiphonResult {
   const crest = resolveCrest(line, req, fluid, atm);
   const st = lineFlowAtHead(line, head, fluid);
   const pc = crestPressureAt(crest, req.source_level_m, st);
-  const status = !(head > 0)
-    ? 'no_flow'
-    : pc >= crest.limitPa
-      ? 'runs'
-      : pc >= crest.vaporPa
-        ? 'marginal'
-        : 'breaks';
+  const status = !(head > 0) ? 'no_flow' : crestStatus(crest, pc);
   const flowing = status !== 'no_flow';
   return {
     status,

@@ -11,12 +11,8 @@ import { BODY_DEADLINE_MS, MAX_BODY_BYTES, concatChunks, refusedByHeaders } from
 import { v1Operation } from '../api/v1-routes';
 import { logWhenDone, requestIdOf } from './access-log';
 import { drainUnreadBody } from './body-limit';
+import { nodeClientAddress } from './client-address';
 import { deadline } from './deadlines';
-
-function first(header: string | string[] | undefined): string | undefined {
-  const value = Array.isArray(header) ? header[0] : header;
-  return value?.split(',')[0]?.trim() || undefined;
-}
 
 /**
  * The body with a byte cap and a deadline, to `done`. Past the cap it stops listening without
@@ -75,7 +71,7 @@ function fromNode(
     header,
     readBody: (limit, deadlineMs) =>
       read ?? new Promise((resolve) => readNodeBody(req, limit, deadlineMs, resolve)),
-    clientAddress: first(req.headers['x-forwarded-for']) ?? req.socket.remoteAddress ?? 'unknown',
+    clientAddress: nodeClientAddress(req),
     requestId,
   };
 }
@@ -108,8 +104,8 @@ function routePath(target: string): string {
 
 /**
  * Answer the request if it is an API v1 route and return true; otherwise return false and leave
- * it to Astro, which answers unknown /api/v1 paths with its 404 and routes unusual spellings of
- * known ones (dot segments, escapes) itself. `baseHeaders` are the security headers every
+ * it to Astro, which routes unusual spellings of known ones (dot segments, escapes) itself and
+ * answers the rest with the API's JSON 404 (src/pages/api/v1/[...rest].ts). `baseHeaders` are the security headers every
  * response carries, as a flat name, value, … list.
  */
 export function serveApiV1(

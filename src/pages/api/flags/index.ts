@@ -5,10 +5,12 @@ import { invalid, jsonBody } from '../../../lib/flags/http';
 import { sendReceivedEmail } from '../../../lib/flags/mail';
 import { takeFlagPoint } from '../../../lib/flags/rate-limit';
 import { newFlagSchema } from '../../../lib/flags/schemas';
+import { routeClientAddress } from '../../../lib/server/client-address';
 
 /** Flag a result: anyone may; signed-out reporters must leave an e-mail address. */
-export const POST: APIRoute = async ({ request, locals, clientAddress }) => {
-  const wait = await takeFlagPoint(clientAddress);
+export const POST: APIRoute = async (context) => {
+  const { request, locals } = context;
+  const wait = await takeFlagPoint(routeClientAddress(context));
   if (wait !== null) {
     return Response.json(
       {
