@@ -17,6 +17,9 @@ export type { Logger };
 
 const LEVELS = ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'];
 
+/** Fields on every line. */
+const BASE = { service: 'drainwright', pid: process.pid };
+
 function levelFromEnv(): string {
   const raw = (process.env.LOG_LEVEL ?? '').trim().toLowerCase();
   return LEVELS.includes(raw) ? raw : 'info';
@@ -54,7 +57,7 @@ function createLogger(): Logger {
   return pino(
     {
       level,
-      base: { service: 'drainwright', pid: process.pid },
+      base: BASE,
       timestamp: pino.stdTimeFunctions.isoTime,
       formatters: { level: (label) => ({ level: label }) },
       serializers: { err: serialize, cause: serialize },
@@ -89,3 +92,22 @@ const store = globalThis as typeof globalThis & { [KEY]?: Logger };
 
 /** The process-wide logger. */
 export const logger: Logger = (store[KEY] ??= createLogger());
+
+const BASE_FIELDS = JSON.stringify(BASE).slice(1, -1);
+
+/**
+ * One line in pino's own layout, written straight to the logger's destination (order kept with
+ * pino's lines). For the access log, where pino's per-line work (mixin, redaction, serializers,
+ * serialising an object) was about a seventh of an API call's time. `fields` is the JSON of the
+ * line's own fields without braces; the caller writes nothing the redaction would remove.
+ */
+export function writeLine(level: 'info' | 'warn' | 'error', fields: string, msg: string): void {
+  if (!logger.isLevelEnabled(level)) return;
+  const stream = (logger as unknown as Record<symbol, pino.DestinationStream>)[
+    pino.symbols.streamSym
+  ];
+  const time = new Date().toISOString();
+  stream.write(
+    `{"level":"${level}","time":"${time}",${BASE_FIELDS},${fields},"msg":${JSON.stringify(msg)}}\n`,
+  );
+}
