@@ -5,6 +5,7 @@ import { readField } from '../lib/calculators/field-input';
 import type { QuantityKind, UnitSystem } from '../lib/hydraulics/units';
 import { toDisplay, unitLabel } from '../lib/hydraulics/units';
 import { writeNumberText } from '../lib/number-text';
+import { useReportPending } from '../lib/stores/pending-inputs';
 import { useInputLocale } from '../lib/stores/use-input-locale';
 
 interface Props {
@@ -25,7 +26,12 @@ interface Props {
 }
 
 /** Up to 6 significant figures, no trailing zeros, in the locale's decimal mark. */
-export function inputText(si: number, system: UnitSystem, kind?: QuantityKind, locale?: string): string {
+export function inputText(
+  si: number,
+  system: UnitSystem,
+  kind?: QuantityKind,
+  locale?: string,
+): string {
   return writeNumberText(kind ? toDisplay(kind, si, system) : si, locale);
 }
 
@@ -36,6 +42,7 @@ export default function NumberField(p: Props): ReactElement {
   const spec = { locale, system: p.system, kind: p.kind, unit: p.unit, range: p.range };
   const [text, setText] = useState(() => inputText(p.value, p.system, p.kind, locale));
   const typed = readField(text, spec);
+  useReportPending(!typed.ok);
   useEffect(() => {
     const current = readField(text, spec);
     const same = current.ok && Math.abs(current.si - p.value) <= 1e-9 * Math.abs(p.value);
@@ -75,7 +82,10 @@ export default function NumberField(p: Props): ReactElement {
         )}
       </div>
       {(p.hint || bad) && (
-        <p id={`${id}-hint`} className={`mt-1 text-step--1 ${bad ? 'font-semibold text-verdict-fails' : 'text-ink-faint'}`}>
+        <p
+          id={`${id}-hint`}
+          className={`mt-1 text-step--1 ${bad ? 'font-semibold text-verdict-fails' : 'text-ink-faint'}`}
+        >
           {problem ?? p.hint}
         </p>
       )}

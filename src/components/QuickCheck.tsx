@@ -7,6 +7,7 @@ import { figureValue, quickAnswer } from '../lib/calculators/quick-result';
 import { quickFlag } from '../lib/flags/quick-flag';
 import type { UnitSystem } from '../lib/hydraulics/units';
 import { formatQuantity } from '../lib/hydraulics/units';
+import { PendingInputsProvider, usePendingInputs } from '../lib/stores/pending-inputs';
 import { useCalcState, useUnitSystem } from '../lib/stores/use-calc-state';
 import CautionNotes from './CautionNotes';
 import ChoiceButtons from './ChoiceButtons';
@@ -14,6 +15,7 @@ import FigureList from './FigureList';
 import QuickInputs from './QuickInputs';
 import ResultActions from './ResultActions';
 import ShareLink from './ShareLink';
+import { StaleNotice, staleClass } from './ToolLayout';
 import UnitToggle from './UnitToggle';
 import VerdictBanner from './VerdictBanner';
 import VerdictDock from './VerdictDock';
@@ -59,65 +61,96 @@ function Limits({ a, system }: { a: QuickAnswer; system: UnitSystem }): ReactEle
 /** The quick check: pick a set-up, type a few numbers, read the verdict and the cautions. */
 export default function QuickCheck(): ReactElement {
   const system = useUnitSystem();
-  const { state, update, query } = useCalcState<QuickState>(QUICK_DEFAULTS, {}, true, QUICK_US_START);
+  const { state, update, query } = useCalcState<QuickState>(
+    QUICK_DEFAULTS,
+    {},
+    true,
+    QUICK_US_START,
+  );
   const answer = useMemo(() => quickAnswer(state), [state]);
   const resultRef = useRef<HTMLElement>(null);
+  const pending = usePendingInputs();
   return (
-    <div className="space-y-5">
-      <div className="flex flex-wrap items-end justify-between gap-3">
-        <ChoiceButtons
-          legend="What are you setting up?"
-          name="mode"
-          value={state.mode}
-          choices={MODES}
-          onChange={(v) => update({ mode: v as QuickMode })}
-        />
-        <UnitToggle />
-      </div>
-      <QuickInputs s={state} update={update} system={system} />
-      <div className="grid gap-4 md:grid-cols-[3fr_2fr]" aria-live="polite">
-        {'error' in answer ? (
-          <p role="alert" className="rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-4 font-semibold">
-            {answer.error}
-          </p>
-        ) : (
-          <>
-            <section id="quick-result" ref={resultRef} aria-label="Result" className="min-w-0 scroll-mt-4 space-y-3">
-              {/* The outline needs a level-2 heading before the result's own h3s. */}
-              <h2 className="sr-only">Result</h2>
-              <VerdictBanner verdict={answer.verdict} />
-              <FigureList figures={answer.figures} system={system} />
-              <Limits a={answer} system={system} />
-              <WarningList warnings={answer.warnings} />
-              <QuickActions state={state} answer={answer} system={system} query={query} />
-            </section>
-            <CautionNotes ids={answer.cautions} />
-          </>
+    <PendingInputsProvider value={pending.tracker}>
+      <div className="space-y-5">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <ChoiceButtons
+            legend="What are you setting up?"
+            name="mode"
+            value={state.mode}
+            choices={MODES}
+            onChange={(v) => update({ mode: v as QuickMode })}
+          />
+          <UnitToggle />
+        </div>
+        <QuickInputs s={state} update={update} system={system} />
+        <div aria-live="polite">
+          <StaleNotice pending={pending.count} />
+        </div>
+        <div
+          className={`grid gap-4 md:grid-cols-[3fr_2fr]${staleClass(pending.count)}`}
+          aria-live="polite"
+        >
+          {'error' in answer ? (
+            <p
+              role="alert"
+              className="rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-4 font-semibold"
+            >
+              {answer.error}
+            </p>
+          ) : (
+            <>
+              <section
+                id="quick-result"
+                ref={resultRef}
+                aria-label="Result"
+                className="min-w-0 scroll-mt-4 space-y-3"
+              >
+                {/* The outline needs a level-2 heading before the result's own h3s. */}
+                <h2 className="sr-only">Result</h2>
+                <VerdictBanner verdict={answer.verdict} />
+                <FigureList figures={answer.figures} system={system} />
+                <Limits a={answer} system={system} />
+                <WarningList warnings={answer.warnings} />
+                <QuickActions state={state} answer={answer} system={system} query={query} />
+              </section>
+              <CautionNotes ids={answer.cautions} />
+            </>
+          )}
+        </div>
+        {!('error' in answer) && (
+          <VerdictDock
+            tone={answer.verdict.tone}
+            word={answer.verdict.word}
+            detail={answer.figures
+              .slice(0, 2)
+              .map((f) => figureValue(f, system))
+              .join(' · ')}
+            target={resultRef}
+            stale={pending.count > 0}
+          />
         )}
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <a
+            href={`${FULL_TOOL[state.mode].href}`}
+            className="flex min-h-11 items-center font-semibold text-teal-deep underline"
+          >
+            {FULL_TOOL[state.mode].label}
+          </a>
+          <ShareLink query={query} />
+        </div>
       </div>
-      {!('error' in answer) && (
-        <VerdictDock
-          tone={answer.verdict.tone}
-          word={answer.verdict.word}
-          detail={answer.figures
-            .slice(0, 2)
-            .map((f) => figureValue(f, system))
-            .join(' · ')}
-          target={resultRef}
-        />
-      )}
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <a href={`${FULL_TOOL[state.mode].href}`} className="flex min-h-11 items-center font-semibold text-teal-deep underline">
-          {FULL_TOOL[state.mode].label}
-        </a>
-        <ShareLink query={query} />
-      </div>
-    </div>
+    </PendingInputsProvider>
   );
 }
 
 /** Save and flag under the quick check's answer, with the engine request the answer came from. */
-function QuickActions(p: { state: QuickState; answer: QuickAnswer; system: UnitSystem; query: string }): ReactElement | null {
+function QuickActions(p: {
+  state: QuickState;
+  answer: QuickAnswer;
+  system: UnitSystem;
+  query: string;
+}): ReactElement | null {
   const calc = quickFlag(p.state, p.answer);
   if (!calc) return null;
   return <ResultActions {...calc} unitSystem={p.system} path="/check" query={p.query} />;

@@ -5,6 +5,7 @@ import type { UnitSystem } from '../lib/hydraulics';
 import { unitLabel } from '../lib/hydraulics';
 import { parseStageCsv, stageCsvText } from '../lib/stage-table-csv';
 import { useInputLocale } from '../lib/stores/use-input-locale';
+import { useReportPending } from '../lib/stores/pending-inputs';
 
 interface Props {
   rows: StageRow[];
@@ -18,6 +19,9 @@ export default function StageTableEditor({ rows, onChange, system }: Props): Rea
   const locale = useInputLocale();
   const [text, setText] = useState(() => stageCsvText(rows, system, locale));
   const [errors, setErrors] = useState<string[]>([]);
+  // the typed table does not parse (a refused upload leaves the table, and the result, as they were)
+  const [textBad, setTextBad] = useState(false);
+  useReportPending(textBad);
   const [loaded, setLoaded] = useState('');
   const emitted = useRef<StageRow[] | null>(null);
   const shownIn = useRef(`${system} ${locale}`);
@@ -26,12 +30,14 @@ export default function StageTableEditor({ rows, onChange, system }: Props): Rea
     if (rows === emitted.current && shownIn.current === `${system} ${locale}`) return;
     shownIn.current = `${system} ${locale}`;
     setErrors([]);
+    setTextBad(false);
     setText(stageCsvText(rows, system, locale));
   }, [system, rows, locale]);
   const apply = (t: string): void => {
     setText(t);
     const r = parseStageCsv(t, system, locale);
     setErrors(r.errors);
+    setTextBad(r.errors.length > 0);
     if (r.errors.length === 0) {
       const next = r.points as StageRow[];
       emitted.current = next;
@@ -80,13 +86,21 @@ export default function StageTableEditor({ rows, onChange, system }: Props): Rea
       </label>
       {loaded && <p className="text-step--1 text-ink-soft">Read from {loaded}.</p>}
       {errors.length > 0 && (
-        <ul role="alert" data-testid="stage-errors" className="space-y-1 rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-3 font-semibold">
+        <ul
+          role="alert"
+          data-testid="stage-errors"
+          className="space-y-1 rounded-lg border-l-8 border-verdict-fails bg-verdict-fails-wash p-3 font-semibold"
+        >
           {errors.map((m) => (
             <li key={m}>{m}</li>
           ))}
         </ul>
       )}
-      {errors.length === 0 && <p className="text-step--1 text-ink-soft" data-testid="stage-count">{rows.length} levels in use.</p>}
+      {errors.length === 0 && (
+        <p className="text-step--1 text-ink-soft" data-testid="stage-count">
+          {rows.length} levels in use.
+        </p>
+      )}
     </div>
   );
 }

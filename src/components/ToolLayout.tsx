@@ -1,4 +1,5 @@
 import type { ReactElement, ReactNode } from 'react';
+import { PendingInputsProvider, usePendingInputs } from '../lib/stores/pending-inputs';
 import UnitToggle from './UnitToggle';
 
 interface Props {
@@ -9,19 +10,62 @@ interface Props {
 
 /** Inputs then the result on a phone; side by side on a wide screen. */
 export default function ToolLayout({ inputs, result, footer }: Props): ReactElement {
+  const pending = usePendingInputs();
   return (
-    <div className="space-y-5">
-      <div className="flex justify-end">
-        <UnitToggle />
-      </div>
-      <div className="grid gap-6 lg:grid-cols-2">
-        <div className="min-w-0 space-y-6">{inputs}</div>
-        <div className="min-w-0 space-y-4" aria-live="polite">
-          {result}
+    <PendingInputsProvider value={pending.tracker}>
+      <div className="space-y-5">
+        <div className="flex justify-end">
+          <UnitToggle />
         </div>
+        <div className="grid gap-6 lg:grid-cols-2">
+          <div className="min-w-0 space-y-6">{inputs}</div>
+          <div className="min-w-0 space-y-4" aria-live="polite">
+            <StaleResult pending={pending.count}>{result}</StaleResult>
+          </div>
+        </div>
+        {footer}
       </div>
-      {footer}
-    </div>
+    </PendingInputsProvider>
+  );
+}
+
+/** The notice above a result while `pending` boxes hold no accepted value; none otherwise. */
+export function StaleNotice({ pending }: { pending: number }): ReactElement | null {
+  if (pending === 0) return null;
+  const boxes = pending === 1 ? '1 box above is' : `${pending} boxes above are`;
+  return (
+    <p
+      data-testid="stale-notice"
+      className="rounded-lg border-l-8 border-ink-soft bg-paper-deep p-3 font-semibold"
+    >
+      Not updated: {boxes} empty or not accepted. The result below is for the last values the tool
+      accepted; fix the marked box to see the answer for what you typed.
+    </p>
+  );
+}
+
+/** Classes that dim a result while it is stale. */
+export const staleClass = (pending: number): string => (pending > 0 ? ' opacity-50' : '');
+
+/**
+ * The result, dimmed under a notice while `pending` boxes hold no accepted value: it is still the
+ * answer for the last accepted inputs, not for what the boxes show. The result keeps its place in
+ * the tree either way, so its own state (an open chart, a half-typed job title) survives.
+ */
+function StaleResult({
+  pending,
+  children,
+}: {
+  pending: number;
+  children: ReactNode;
+}): ReactElement {
+  return (
+    <>
+      <StaleNotice pending={pending} />
+      <div data-stale={pending > 0 || undefined} className={`space-y-4${staleClass(pending)}`}>
+        {children}
+      </div>
+    </>
   );
 }
 
