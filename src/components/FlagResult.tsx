@@ -29,12 +29,29 @@ function engineVersionOf(results: object): string {
   return typeof v === 'string' && v ? v : ENGINE_VERSION;
 }
 
+/** What went wrong, in the form's own words; fields the crew never sees are not named. */
+function flagErrorText(
+  err: { message?: string; issues?: { path: string; message: string }[] },
+  typedEmail: string,
+): string {
+  const issue = err.issues?.[0];
+  if (!issue) return err.message ?? 'Sending failed; try again.';
+  if (issue.path === 'email') {
+    return typedEmail
+      ? 'That e-mail address does not look complete; check it.'
+      : 'Leave an e-mail address so we can answer you.';
+  }
+  if (issue.path === 'message') return `Tell us more: ${issue.message}`;
+  return `This result could not be attached to the flag (${issue.message}).`;
+}
+
+/** Send the flag; the address we will write to, or what went wrong. */
 async function sendFlag(
   p: FlagResultProps,
   reason: FlagReason,
   message: string,
   email: string,
-): Promise<string | null> {
+): Promise<{ error: string } | { email: string }> {
   const page = p.page ?? `${window.location.pathname}${window.location.search}`;
   const body = {
     tool: p.tool,
@@ -55,20 +72,15 @@ async function sendFlag(
       headers: { 'Content-Type': 'application/json' },
       body: JSON.stringify(body),
     });
-    if (res.ok) return null;
-    const err = (await res.json().catch(() => ({}))) as {
+    const answer = (await res.json().catch(() => ({}))) as {
+      email?: string;
       message?: string;
       issues?: { path: string; message: string }[];
     };
-    const emailIssue = err.issues?.find((i) => i.path === 'email');
-    if (emailIssue) return 'Leave an e-mail address so we can answer you.';
-    return (
-      err.message ??
-      err.issues?.map((i) => `${i.path}: ${i.message}`).join('; ') ??
-      'Sending failed; try again.'
-    );
+    if (res.ok) return { email: answer.email ?? email };
+    return { error: flagErrorText(answer, email) };
   } catch {
-    return 'No connection; try again when you have signal.';
+    return { error: 'No connection; try again when you have signal.' };
   }
 }
 
@@ -107,8 +119,8 @@ export default function FlagResult(p: FlagResultProps): ReactElement {
   const submit = async (e: FormEvent): Promise<void> => {
     e.preventDefault();
     setPhase({ step: 'sending' });
-    const error = await sendFlag(p, reason, message.trim(), email.trim());
-    setPhase(error ? { step: 'open', error } : { step: 'sent', email: email.trim() });
+    const sent = await sendFlag(p, reason, message.trim(), email.trim());
+    setPhase('error' in sent ? { step: 'open', error: sent.error } : { step: 'sent', ...sent });
   };
 
   return (

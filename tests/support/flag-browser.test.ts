@@ -90,4 +90,28 @@ describe('flagging from the quick check', () => {
     await crew.close();
     await desk.close();
   }, 90_000);
+
+  test('does confirm the account address to a signed-in reporter, whatever was typed', async () => {
+    const crew = await phoneContext(browser, app.url);
+    const [name, value] = sessionCookie(db, 'usr_demo_crew1').split('=');
+    await crew.addCookies([{ name, value, url: app.url }]);
+    const page = await crew.newPage();
+    await openHydrated(page, '/check');
+    await page.getByRole('button', { name: 'Flag this result' }).click();
+    const typed = page.getByLabel('Your e-mail, so we can answer');
+    // passes the browser's own check (no dot needed there) but not ours
+    await typed.fill('crew@site');
+    await page.getByRole('button', { name: 'Send to support' }).click();
+    // a malformed address is named as such, not as a missing one, and no field name shows
+    await expect(page.getByRole('alert').textContent()).resolves.toBe(
+      'That e-mail address does not look complete; check it.',
+    );
+    await typed.fill('someone.else@example.org');
+    await page.getByRole('button', { name: 'Send to support' }).click();
+    await page.getByTestId('flag-sent').waitFor();
+    const sent = await page.getByTestId('flag-sent').textContent();
+    expect(sent).toContain('tomas@heronsgate.example');
+    expect(sent).not.toContain('someone.else');
+    await crew.close();
+  }, 60_000);
 });

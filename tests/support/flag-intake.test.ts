@@ -115,7 +115,9 @@ describe('POST /api/flags', () => {
       tomas,
     );
     expect(res.status).toBe(201);
-    const { id } = (await res.json()) as { id: string };
+    const { id, email } = (await res.json()) as { id: string; email: string };
+    // the answer names the address we write to, so the form can confirm the right one
+    expect(email).toBe('tomas@heronsgate.example');
     const row = db.select().from(flags).where(eq(flags.id, id)).get();
     expect(row).toMatchObject({
       reporterUserId: 'usr_demo_crew1',

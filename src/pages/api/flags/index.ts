@@ -44,5 +44,6 @@ export const POST: APIRoute = async (context) => {
     token,
     reason: parsed.data.reason,
   });
-  return Response.json({ id, status: 'new', emailed }, { status: 201 });
+  // `email` is where we write: the account's address when signed in, whatever was typed
+  return Response.json({ id, status: 'new', emailed, email }, { status: 201 });
 };
