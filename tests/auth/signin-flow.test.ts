@@ -58,6 +58,20 @@ describe('sign-in by e-mail link', () => {
     expect(home).toMatch(/data-testid="current-org"[^>]*>\s*Working in <strong[^>]*>new\.crew@riverside\.test<\/strong> as owner\s*· Field plan/);
   });
 
+  test('does name the account link truthfully: the signed-in name on /app, "Account" on built pages', async () => {
+    const email = 'header.crew@riverside.test';
+    const form = new URLSearchParams({ email, next: '/app' });
+    await fetch(`${app.url}/signin`, { method: 'POST', body: form, headers: { Origin: app.url }, redirect: 'manual' });
+    const callback = await fetch(await latestLink(email), { redirect: 'manual' });
+    const cookie = callback.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const link = (html: string): string => /data-testid="account-link"[^>]*>\s*([^<]*?)\s*</.exec(html)![1];
+    expect(link(await (await fetch(`${app.url}/app`, { headers: { Cookie: cookie } })).text())).toBe(`Your account (${email})`);
+    // the quick check is built ahead and served alike to the signed-in and the signed-out
+    for (const headers of [{ Cookie: cookie }, {}]) {
+      expect(link(await (await fetch(`${app.url}/check`, { headers })).text())).toBe('Account');
+    }
+  });
+
   test('does refuse a used link, signed-out API calls, crew on owner APIs and cross-site posts', async () => {
     const used = await latestLink('rosa@heronsgate.example');
     const again = await fetch(used, { redirect: 'manual' });
