@@ -67,7 +67,7 @@ describe('sign-in by e-mail link', () => {
     const link = (html: string): string => /data-testid="account-link"[^>]*>\s*([^<]*?)\s*</.exec(html)![1];
     expect(link(await (await fetch(`${app.url}/app`, { headers: { Cookie: cookie } })).text())).toBe(`Your account (${email})`);
     // the quick check is built ahead and served alike to the signed-in and the signed-out
-    for (const headers of [{ Cookie: cookie }, {}]) {
+    for (const headers of [{ Cookie: cookie }, {}] as Record<string, string>[]) {
       expect(link(await (await fetch(`${app.url}/check`, { headers })).text())).toBe('Account');
     }
   });
