@@ -1,22 +1,43 @@
+import { eq, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
+import { subscriptions } from '../../../db/schema';
 import type { Db } from '../db/client';
 import { logger } from '../server/logger';
 import { DUPLICATE_OF_KEY, PAYING, applySubscription, rowFrom } from './sync';
 
 /**
  * What the payments service itself holds for a customer, not our copy: our rows lag behind the
- * webhooks, and a subscription whose events have not landed yet still bills.
+ * webhooks, and a subscription whose events have not landed yet still bills. Oldest first.
+ * @param seenAt our own order of first sight (lower first; Infinity for unseen), to break a tie
+ *   between two created in the same second, as two tabs' checkouts paid moments apart are.
  */
 export async function liveAtProvider(
   stripe: Stripe,
   customerId: string,
+  seenAt: (id: string) => number = () => Infinity,
 ): Promise<Stripe.Subscription[]> {
   const live: Stripe.Subscription[] = [];
   for await (const sub of stripe.subscriptions.list({ customer: customerId, limit: 100 })) {
     if ((PAYING as readonly string[]).includes(sub.status)) live.push(sub);
   }
   // Oldest first: the one kept is the one the organisation has been using (seats, card).
-  return live.sort((a, b) => a.created - b.created || a.id.localeCompare(b.id));
+  return live.sort(
+    (a, b) => a.created - b.created || seenAt(a.id) - seenAt(b.id) || a.id.localeCompare(b.id),
+  );
+}
+
+/**
+ * The order in which our rows of a customer's subscriptions were first stored: SQLite's rowid,
+ * which an upsert keeps (a vacuum may renumber it, but keeps the order).
+ */
+function firstSeenOrder(db: Db, customerId: string): (id: string) => number {
+  const rows = db
+    .select({ id: subscriptions.id, seen: sql<number>`rowid` })
+    .from(subscriptions)
+    .where(eq(subscriptions.customerId, customerId))
+    .all();
+  const order = new Map(rows.map((r) => [r.id, r.seen]));
+  return (id) => order.get(id) ?? Infinity;
 }
 
 /** Store the service's state of one subscription for an organisation. */
@@ -40,7 +61,7 @@ export async function cancelDuplicates(
   organisationId: string,
   customerId: string,
 ): Promise<string[]> {
-  const [kept, ...extra] = await liveAtProvider(stripe, customerId);
+  const [kept, ...extra] = await liveAtProvider(stripe, customerId, firstSeenOrder(db, customerId));
   for (const dup of extra) {
     logger.warn(
       { organisationId, subscriptionId: dup.id, keptId: kept.id },
