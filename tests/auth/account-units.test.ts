@@ -100,6 +100,10 @@ describe('units across devices', () => {
     await page.getByRole('button', { name: 'Save units' }).click();
     await page.getByRole('status').waitFor();
     expect(stored('usr_demo_crew2')).toBe('metric');
+    // the notice can show before the page's module script has copied the choice to this browser
+    await expect
+      .poll(() => page.evaluate(() => localStorage.getItem('drainwright:units')))
+      .toBe('metric');
     await openHydrated(page, '/siphon');
     expect(await page.getByRole('button', { name: 'Metric' }).getAttribute('aria-pressed')).toBe(
       'true',
