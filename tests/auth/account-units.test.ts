@@ -4,6 +4,7 @@ import { launchBrowser, phoneContext } from '../helpers/browser';
 import { startJobsApp } from '../jobs/app-fixture';
 import type { JobsApp } from '../jobs/app-fixture';
 import { openHydrated } from '../browser/calculators-helpers';
+import { UNIT_STORAGE_KEY } from '../../src/lib/stores/unit-system';
 
 let t: JobsApp;
 let browser: Browser;
@@ -102,7 +103,7 @@ describe('units across devices', () => {
     expect(stored('usr_demo_crew2')).toBe('metric');
     // the notice can show before the page's module script has copied the choice to this browser
     await expect
-      .poll(() => page.evaluate(() => localStorage.getItem('drainwright:units')))
+      .poll(() => page.evaluate((key) => localStorage.getItem(key), UNIT_STORAGE_KEY))
       .toBe('metric');
     await openHydrated(page, '/siphon');
     expect(await page.getByRole('button', { name: 'Metric' }).getAttribute('aria-pressed')).toBe(
