@@ -13,6 +13,8 @@ import { logWhenDone, requestIdOf } from './access-log';
 import { drainUnreadBody } from './body-limit';
 import { nodeClientAddress } from './client-address';
 import { deadline } from './deadlines';
+import type { Write } from './turn-batch';
+import { inTurnBatch } from './turn-batch';
 
 /**
  * The body with a byte cap and a deadline, to `done`. Past the cap it stops listening without
@@ -77,22 +79,29 @@ function fromNode(
 }
 
 /**
- * Write the answer. The headers go to writeHead as one flat list with nothing set before it,
- * which Node writes as given instead of storing each one first (a tenth of the call's time).
- * An operation's headers (content type, caching, CORS) never repeat a security header.
+ * The answer ready to write. The headers go to writeHead as one flat list with nothing set
+ * before it, which Node writes as given instead of storing each one first (a tenth of the
+ * call's time). An operation's headers (content type, caching, CORS) never repeat a security
+ * header.
  */
-function send(
+function prepared(
   req: http.IncomingMessage,
   res: http.ServerResponse,
   answer: ApiAnswer,
   head: string[],
-): void {
+): Write {
   const body = answer.body === undefined ? undefined : JSON.stringify(answer.body);
   for (const name in answer.headers) head.push(name, answer.headers[name]);
   if (body !== undefined) head.push('Content-Length', String(Buffer.byteLength(body)));
-  drainUnreadBody(req, res);
-  res.writeHead(answer.status, head);
-  res.end(body);
+  return () => {
+    try {
+      drainUnreadBody(req, res);
+      res.writeHead(answer.status, head);
+      res.end(body);
+    } catch {
+      res.destroy(); // the socket went away mid-answer
+    }
+  };
 }
 
 /** The route's path: the target without its query and without one trailing slash. */
@@ -120,22 +129,29 @@ export function serveApiV1(
   const id = requestIdOf(req);
   logWhenDone(req, res, id);
   const head = [...baseHeaders, 'X-Request-Id', id];
+  const destroy = (): void => void res.destroy();
   const reply = (answer: ApiAnswer): void => {
     try {
-      send(req, res, answer, head);
+      prepared(req, res, answer, head)();
     } catch {
-      res.destroy(); // the socket went away mid-answer
+      destroy();
     }
   };
   // Operations are guarded and do not throw or reject; they answer synchronously once the body
-  // is in. A JSON body an operation will read is read first, with a callback: a promise per
-  // request cost a tenth of the call.
+  // is in, and run in the turn's batch (turn-batch.ts). A JSON body an operation will read is
+  // read first, with a callback: a promise per request cost a tenth of the call.
   const header = headerOf(req);
-  const run = (read?: BodyBytes): void => {
-    const answer = operation(fromNode(req, target, id, header, read));
-    if (answer instanceof Promise) answer.then(reply, () => res.destroy());
-    else reply(answer);
-  };
+  const run = (read?: BodyBytes): void =>
+    inTurnBatch(() => {
+      try {
+        const answer = operation(fromNode(req, target, id, header, read));
+        if (!(answer instanceof Promise)) return prepared(req, res, answer, head);
+        answer.then(reply, destroy);
+        return undefined;
+      } catch {
+        return destroy;
+      }
+    });
   if (req.method === 'POST' && !refusedByHeaders(header)) {
     readNodeBody(req, MAX_BODY_BYTES, BODY_DEADLINE_MS, run);
   } else run();
