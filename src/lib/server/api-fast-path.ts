@@ -73,6 +73,7 @@ function fromNode(
   read?: BodyBytes,
 ): ApiRequest {
   let url: URL | undefined;
+  let address: string | undefined;
   return {
     method: req.method ?? 'GET',
     // Only the path and query are read; the Host header is not trusted (as Astro does by
@@ -83,7 +84,10 @@ function fromNode(
     header,
     readBody: (limit, deadlineMs) =>
       read ?? new Promise((resolve) => readNodeBody(req, limit, deadlineMs, resolve)),
-    clientAddress: nodeClientAddress(req),
+    // Read only by the rate limit (it reads TRUST_PROXY_HOPS from the environment).
+    get clientAddress(): string {
+      return (address ??= nodeClientAddress(req));
+    },
     requestId,
   };
 }
