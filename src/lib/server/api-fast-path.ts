@@ -166,13 +166,14 @@ export function serveApiV1(
       return destroy;
     }
   };
-  const later = (read: BodyBytes): void => inTurnBatch(() => answerWith(read));
   if (req.method !== 'POST' || refusedByHeaders(header)) inTurnBatch(() => answerWith());
   else {
     inTurnBatch(() => {
       const read = bufferedBody(req, MAX_BODY_BYTES);
       if (read) return answerWith(read);
-      readNodeBody(req, MAX_BODY_BYTES, BODY_DEADLINE_MS, later);
+      readNodeBody(req, MAX_BODY_BYTES, BODY_DEADLINE_MS, (rest) =>
+        inTurnBatch(() => answerWith(rest)),
+      );
       return undefined;
     });
   }

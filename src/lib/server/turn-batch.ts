@@ -1,10 +1,11 @@
 /**
- * Work gathered per event-loop turn. On virtual machines every system call cools the CPU's
- * caches and address translations, so a calculation run between one socket's read and its write
- * pays for that each time. Run back to back for every request that came in during one turn, and
- * their writes then back to back, each stays warm: POST /api/v1/siphon went from about 11 300
- * to 19 000 req/s at 20 connections (README, API speed). A job waits at most for the sockets
- * already readable in this turn, microseconds when the server is quiet.
+ * Work gathered per event-loop turn. On the bench host (a nested virtual machine) a calculation
+ * run between one socket's read and its write cost about four times what it costs in a loop,
+ * most likely because each system call leaves the caches cold. Run back to back for every
+ * request that came in during one turn, and their writes then back to back, each stays warm:
+ * POST /api/v1/siphon went from about 11 300 to 19 000 req/s at 20 connections (README, API
+ * speed). A job waits at most for the sockets already readable in this turn, microseconds when
+ * the server is quiet.
  */
 
 /** Writes a prepared answer; runs after every job of the turn has been prepared. */
