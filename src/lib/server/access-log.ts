@@ -12,17 +12,25 @@ export function requestIdOf(req: http.IncomingMessage): string {
 /**
  * Write one access-log line when the response is done: method, path (no query), status,
  * duration in ms and whether the client went away first. 5xx log at error, 4xx at warn, the
- * rest at info.
+ * rest at info. `path` is given when the caller already knows the route (API v1), so the
+ * target is not scrubbed again; it must need no JSON escaping.
  */
-export function logWhenDone(req: http.IncomingMessage, res: http.ServerResponse, id: string): void {
+export function logWhenDone(
+  req: http.IncomingMessage,
+  res: http.ServerResponse,
+  id: string,
+  path?: string,
+): void {
   const started = performance.now();
   res.once('close', () => {
     const status = res.statusCode;
     const ms = Math.round((performance.now() - started) * 10) / 10;
-    // The fields of pino's line for { reqId, method, path, status, ms, aborted? }, built by hand.
+    // The fields of pino's line for { reqId, method, path, status, ms, aborted? }, built by
+    // hand. Ids are [\w-] tokens (request-id.ts) and methods HTTP tokens: neither needs escaping.
     const fields =
-      `"reqId":${JSON.stringify(id)},"method":${JSON.stringify(req.method ?? '')},` +
-      `"path":${JSON.stringify(logPath(req.url))},"status":${status},"ms":${ms}` +
+      `"reqId":"${id}","method":"${req.method ?? ''}",` +
+      `"path":${path === undefined ? JSON.stringify(logPath(req.url)) : `"${path}"`},` +
+      `"status":${status},"ms":${ms}` +
       (res.writableFinished ? '' : ',"aborted":true');
     writeLine(status >= 500 ? 'error' : status >= 400 ? 'warn' : 'info', fields, 'request');
   });

@@ -138,10 +138,11 @@ export function serveApiV1(
 ): boolean {
   const target = req.url ?? '/';
   if (!target.startsWith('/api/v1/')) return false;
-  const operation = v1Operation(routePath(target), req.method ?? 'GET');
+  const path = routePath(target);
+  const operation = v1Operation(path, req.method ?? 'GET');
   if (!operation) return false;
   const id = requestIdOf(req);
-  logWhenDone(req, res, id);
+  logWhenDone(req, res, id, path);
   const head = [...baseHeaders, 'X-Request-Id', id];
   const destroy = (): void => void res.destroy();
   const reply = (answer: ApiAnswer): void => {
